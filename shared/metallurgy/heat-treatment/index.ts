@@ -1,0 +1,2 @@
+// Re-exports of this topic's modules; each owner adds its own lines.
+export {};
