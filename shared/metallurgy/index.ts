@@ -6,6 +6,7 @@ export * from "./errors";
 export * from "./validate";
 export * from "./random";
 export * from "./composition";
+export * from "./grades";
 export * from "./passivity";
 export * from "./carbides";
 export * from "./hardening";
