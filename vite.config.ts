@@ -7,6 +7,7 @@ import remarkMdxFrontmatter from "remark-mdx-frontmatter";
 import remarkGfm from "remark-gfm";
 import remarkMath from "remark-math";
 import rehypeKatex from "rehype-katex";
+import { mdxHeadingIdsPlugin, remarkHeadingIds } from "./src/components/mdx/pipeline/heading-ids";
 import { fileURLToPath } from "node:url";
 
 const root = (p: string) => fileURLToPath(new URL(p, import.meta.url));
@@ -15,10 +16,11 @@ const apiPort = process.env.PORT ?? "3000";
 export default defineConfig({
   plugins: [
     // MDX must run before the React plugin, which must also see .mdx output.
+    mdxHeadingIdsPlugin(),
     {
       enforce: "pre",
       ...mdx({
-        remarkPlugins: [remarkFrontmatter, remarkMdxFrontmatter, remarkGfm, remarkMath],
+        remarkPlugins: [remarkFrontmatter, remarkMdxFrontmatter, remarkGfm, remarkMath, remarkHeadingIds],
         rehypePlugins: [rehypeKatex],
         providerImportSource: "@mdx-js/react",
       }),
@@ -36,7 +38,25 @@ export default defineConfig({
     proxy: { "/api": `http://localhost:${apiPort}` },
   },
   worker: { format: "es" },
-  build: { outDir: "dist", sourcemap: false, chunkSizeWarningLimit: 700 },
+  build: {
+    outDir: "dist",
+    sourcemap: false,
+    chunkSizeWarningLimit: 700,
+    // No data: URIs, so the strict Content-Security-Policy never has to allow them.
+    assetsInlineLimit: 0,
+    rolldownOptions: {
+      output: {
+        // Long-lived vendor chunks for what every page needs; konva, mathjs and the
+        // simulations stay in the lazy chunks of the pages that import them.
+        codeSplitting: {
+          groups: [
+            { name: "react", test: /node_modules[\\/](react|react-dom|scheduler|react-router|cookie|set-cookie-parser)[\\/]/ },
+            { name: "query", test: /node_modules[\\/]@tanstack[\\/](query-core|react-query)[\\/]/ },
+          ],
+        },
+      },
+    },
+  },
   test: {
     projects: [
       {

@@ -1,14 +1,19 @@
 import { z } from "zod";
+import { isCommonPassword } from "./common-passwords";
 
 export const ROLES = ["student", "instructor", "admin"] as const;
 export const roleSchema = z.enum(ROLES);
 export type Role = z.infer<typeof roleSchema>;
 
-/** Passwords: 8 to 128 characters, checked exactly as typed (no trimming, no truncation). */
+/**
+ * New passwords: 8 to 128 characters, checked exactly as typed (no trimming, no truncation,
+ * no composition rules), and not on the short common-password list.
+ */
 export const passwordSchema = z
   .string()
   .min(8, "Use at least 8 characters.")
-  .max(128, "Use at most 128 characters.");
+  .max(128, "Use at most 128 characters.")
+  .refine((p) => !isCommonPassword(p), "This password is too common. Choose another.");
 
 export const loginRequestSchema = z.object({
   email: z.email("Enter a valid e-mail address.").max(254),

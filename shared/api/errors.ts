@@ -12,6 +12,8 @@ export type ApiErrorCode =
   | "invalid_credentials"
   | "storage_full"
   | "internal_error"
+  | "invalid_json"
+  | "service_unavailable"
   | (string & {});
 
 export interface ApiErrorBody {

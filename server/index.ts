@@ -1,0 +1,50 @@
+import "./env-preload";
+import type { AddressInfo } from "node:net";
+import { createApp } from "./app";
+import { loadConfig } from "./config";
+
+/** Start the product: load config, build the app, listen, shut down cleanly on SIGTERM/SIGINT. */
+async function main(): Promise<void> {
+  const config = loadConfig(process.env);
+  const { app, close, logger } = await createApp(config);
+
+  const server = app.listen(config.port, config.host ?? "0.0.0.0");
+  await new Promise<void>((resolve, reject) => {
+    server.once("listening", resolve);
+    server.once("error", reject);
+  });
+  const { port } = server.address() as AddressInfo;
+  const shownHost = config.host && config.host !== "0.0.0.0" ? config.host : "localhost";
+  logger.info("Grain & Edge is running", { url: `http://${shownHost}:${port}`, database: config.databasePath });
+  if (config.logLevel === "silent") console.log(`Grain & Edge is running on http://${shownHost}:${port}`);
+
+  let stopping = false;
+  const stop = (signal: string) => {
+    if (stopping) return;
+    stopping = true;
+    logger.info("shutting down", { signal });
+    // Stop accepting connections, let in-flight requests finish, then close the database.
+    server.close(() => {
+      close().then(
+        () => process.exit(0),
+        (err) => {
+          logger.error("error while closing the database", { error: String(err) });
+          process.exit(1);
+        },
+      );
+    });
+    server.closeIdleConnections();
+    // Do not hang forever on a stuck keep-alive client.
+    setTimeout(() => {
+      logger.error("forced exit after 10 s");
+      process.exit(1);
+    }, 10_000).unref();
+  };
+  process.on("SIGTERM", () => stop("SIGTERM"));
+  process.on("SIGINT", () => stop("SIGINT"));
+}
+
+main().catch((err: unknown) => {
+  console.error(err instanceof Error ? err.message : err);
+  process.exit(1);
+});

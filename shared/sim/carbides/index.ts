@@ -1,0 +1,11 @@
+// Carbide population simulation: pure state logic (no DOM).
+export * from "./params";
+export * from "./constants";
+export * from "./composition";
+export * from "./population";
+export * from "./indices";
+export * from "./coarsening";
+export * from "./field";
+export * from "./edge";
+export * from "./state";
+export * from "./summary";

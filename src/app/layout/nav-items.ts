@@ -1,0 +1,20 @@
+import { ROLE_HOME, type PublicUser, type Role } from "@shared/api/auth";
+import { paths } from "@/config/paths";
+
+export interface NavItem {
+  to: string;
+  label: string;
+}
+
+const HOME_LABEL: Record<Role, string> = {
+  student: "My learning",
+  instructor: "Teaching",
+  admin: "School admin",
+};
+
+/** The main navigation for whoever is (or is not) signed in. */
+export function navItemsFor(user: PublicUser | null | undefined): NavItem[] {
+  const lab: NavItem = { to: paths.lab, label: "Lab" };
+  if (!user) return [lab];
+  return [{ to: ROLE_HOME[user.role], label: HOME_LABEL[user.role] }, lab, { to: paths.account, label: "Account" }];
+}

@@ -1,0 +1,65 @@
+/**
+ * All client routes. Page modules are loaded lazily (each exports `Component`,
+ * and `loader` where it needs one); guards run as loaders before a page renders.
+ */
+import type { QueryClient } from "@tanstack/react-query";
+import { createBrowserRouter, type LoaderFunctionArgs } from "react-router";
+import type { Role } from "@shared/api/auth";
+import { meQueryOptions } from "@/api/auth";
+import { paths, routePatterns } from "@/config/paths";
+import { redirectIfSignedIn, requireUser } from "./guards";
+import { ProtectedOutlet } from "./layout/protected-outlet";
+import { RootLayout } from "./layout/root-layout";
+import { HydrateFallback } from "./routes/hydrate-fallback";
+import { Component as LandingPage } from "./routes/landing";
+import { NotFoundPage } from "./routes/not-found";
+import { RouteError } from "./routes/route-error";
+
+export function createAppRouter(queryClient: QueryClient) {
+  /** A role's home: check the session and role, and start fetching the overview in parallel with the page code. */
+  const homeLoader = (role: Role) => async (args: LoaderFunctionArgs) => {
+    const user = await requireUser(queryClient, [role])(args);
+    // Dynamic import keeps the summary's schema (and zod) out of the first page's bundle.
+    void import("@/api/me").then(({ meSummaryQueryOptions }) => queryClient.prefetchQuery(meSummaryQueryOptions()));
+    return user;
+  };
+
+  return createBrowserRouter([
+    {
+      id: "root",
+      Component: RootLayout,
+      HydrateFallback,
+      // Know who is signed in before the first paint, so the header does not flicker.
+      loader: () => queryClient.ensureQueryData(meQueryOptions()).catch(() => null),
+      children: [
+        {
+          // Errors in any page render inside the layout, keeping the header and navigation.
+          errorElement: <RouteError />,
+          children: [
+            { path: paths.home, Component: LandingPage },
+            {
+              path: paths.signIn,
+              loader: redirectIfSignedIn(queryClient),
+              lazy: () => import("./routes/sign-in"),
+            },
+            { path: paths.lab, lazy: () => import("./routes/lab-index") },
+            { path: routePatterns.labSimulation, lazy: () => import("./routes/lab-simulation") },
+            {
+              Component: ProtectedOutlet,
+              children: [
+                { path: paths.learn, loader: homeLoader("student"), lazy: () => import("./routes/learn") },
+                { path: paths.teach, loader: homeLoader("instructor"), lazy: () => import("./routes/teach") },
+                { path: paths.admin, loader: homeLoader("admin"), lazy: () => import("./routes/admin") },
+                { path: paths.account, loader: requireUser(queryClient), lazy: () => import("./routes/account") },
+                // Lessons (features/lessons): the course outline and one lesson.
+                { path: "/learn/modules", loader: requireUser(queryClient), lazy: () => import("@/features/lessons/modules-page") },
+                { path: "/learn/:moduleSlug/:lessonSlug", loader: requireUser(queryClient), lazy: () => import("@/features/lessons/lesson-page") },
+              ],
+            },
+            { path: "*", Component: NotFoundPage },
+          ],
+        },
+      ],
+    },
+  ]);
+}

@@ -1,0 +1,31 @@
+/** Every client route path, in one place. Build links with these, never with string literals. */
+export const paths = {
+  home: "/",
+  signIn: "/sign-in",
+  learn: "/learn",
+  teach: "/teach",
+  admin: "/admin",
+  account: "/account",
+  lab: "/lab",
+  labSimulation: (simId: string) => `/lab/${encodeURIComponent(simId)}`,
+} as const;
+
+/** Route patterns for the router (the parameterised ones differ from the link builders). */
+export const routePatterns = {
+  labSimulation: "/lab/:simId",
+} as const;
+
+/** A sign-in link that brings the user back to `next` afterwards. */
+export function signInPath(next?: string): string {
+  return next && isSafeNext(next) ? `${paths.signIn}?next=${encodeURIComponent(next)}` : paths.signIn;
+}
+
+/**
+ * Only same-origin, absolute paths may be used as a post-sign-in target:
+ * "//evil.example" or "https://..." would turn sign-in into an open redirect.
+ */
+export function isSafeNext(next: string | null | undefined): next is string {
+  if (!next) return false;
+  if (!next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")) return false;
+  return !next.startsWith(paths.signIn);
+}
