@@ -15,8 +15,8 @@ async function main(): Promise<void> {
   });
   const { port } = server.address() as AddressInfo;
   const shownHost = config.host && config.host !== "0.0.0.0" ? config.host : "localhost";
-  logger.info("Grain & Edge is running", { url: `http://${shownHost}:${port}`, database: config.databasePath });
-  if (config.logLevel === "silent") console.log(`Grain & Edge is running on http://${shownHost}:${port}`);
+  logger.info("listening", { port, database: config.databasePath, nodeEnv: config.nodeEnv });
+  console.log(`Grain & Edge is running on http://${shownHost}:${port}`);
 
   let stopping = false;
   const stop = (signal: string) => {

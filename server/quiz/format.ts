@@ -1,5 +1,5 @@
 /** Number and answer formatting for graded results. */
-import { unitLabel } from "../../shared/api/quizzes";
+import { unitSuffix } from "../../shared/api/quizzes";
 
 /** A value with `decimals` places, or 4 significant figures when the author gave none. */
 export function formatNumber(value: number, decimals?: number): string {
@@ -12,9 +12,7 @@ export function formatNumber(value: number, decimals?: number): string {
 }
 
 export function formatQuantity(value: number, unit: string, decimals?: number): string {
-  const label = unitLabel(unit);
-  if (unit === "1" || unit === "") return formatNumber(value, decimals);
-  return `${formatNumber(value, decimals)} ${label}`;
+  return `${formatNumber(value, decimals)}${unitSuffix(unit)}`;
 }
 
 /** Simulation parameters written out compactly: "crMassPct 13, environment salt". */

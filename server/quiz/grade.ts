@@ -5,7 +5,7 @@
  */
 import { evaluate } from "mathjs";
 import type { QuestionResult, QuizAnswer } from "../../shared/api/quizzes";
-import { unitLabel } from "../../shared/api/quizzes";
+import { unitLabel, unitSuffix } from "../../shared/api/quizzes";
 import type {
   MultipleChoiceQuestion,
   NumericQuestion,
@@ -112,8 +112,8 @@ export function evaluateExpression(expression: string, params: Record<string, nu
 
 function describeTolerance(question: NumericQuestion, correctValue: number): string {
   const tol = question.tolerance;
-  if ("abs" in tol) return `±${formatNumber(tol.abs)} ${unitLabel(question.unit)}`.trim();
-  return `±${formatNumber(tol.rel * 100)} % (±${formatNumber(tol.rel * Math.abs(correctValue))} ${unitLabel(question.unit)})`.trim();
+  if ("abs" in tol) return `±${formatNumber(tol.abs)}${unitSuffix(question.unit)}`;
+  return `±${formatNumber(tol.rel * 100)} % (±${formatNumber(tol.rel * Math.abs(correctValue))}${unitSuffix(question.unit)})`;
 }
 
 function working(question: NumericQuestion, params: Record<string, number>, correctValue: number): string | undefined {
@@ -133,7 +133,7 @@ export function gradeNumeric(question: NumericQuestion, answer: QuizAnswer | und
   const base = { correctAnswer, working: working(question, params, correctValue) };
   if (answer?.kind !== "numeric") return { ...wrongKind(question, correctAnswer, answer), working: base.working };
 
-  const given = `${formatNumber(answer.value)} ${unitLabel(answer.unit)}`.trim();
+  const given = `${formatNumber(answer.value)}${unitSuffix(answer.unit)}`;
   const menu = unitMenu(question);
   if (!menu.includes(answer.unit)) {
     return result(question, false, { ...base, given, feedback: `“${unitLabel(answer.unit)}” is not a unit offered for this question.` });
@@ -164,10 +164,7 @@ export function gradeNumeric(question: NumericQuestion, answer: QuizAnswer | und
     feedback:
       off === null
         ? "That unit cannot be converted to the one asked for."
-        : `Off by ${formatNumber(Math.abs(off))} ${unitLabel(question.unit)}; the accepted range is ${describeTolerance(question, correctValue)}.`.replace(
-            / {2}/g,
-            " ",
-          ),
+        : `Off by ${formatNumber(Math.abs(off))}${unitSuffix(question.unit)}; the accepted range is ${describeTolerance(question, correctValue)}.`,
   });
 }
 

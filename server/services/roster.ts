@@ -19,10 +19,22 @@ interface ParsedRow {
 const EMAIL_HEADER = /^e-?mail( address)?$/i;
 const NAME_HEADER = /^(full |display )?name$/i;
 
+/**
+ * Comma, semicolon (spreadsheets in many locales) or TAB: whichever the first non-blank line uses
+ * most. (papaparse's own guess needs several rows and misreads one-line files.)
+ */
+function guessDelimiter(text: string): string {
+  const line = text.split(/\r?\n/).find((l) => l.trim() !== "") ?? "";
+  const outsideQuotes = line.replace(/"[^"]*"/g, "");
+  const counts = [",", ";", "\t"].map((d) => ({ d, n: outsideQuotes.split(d).length - 1 }));
+  const best = counts.reduce((a, b) => (b.n > a.n ? b : a));
+  return best.n > 0 ? best.d : ",";
+}
+
 /** Parse the CSV text into rows with per-row format errors (no database access). */
 export function parseRoster(csv: string): { headerDetected: boolean; rows: ParsedRow[]; fileErrors: string[] } {
   const text = csv.replace(/^\uFEFF/, ""); // spreadsheet BOM
-  const parsed = Papa.parse<string[]>(text, { skipEmptyLines: false, delimitersToGuess: [",", ";", "\t"] });
+  const parsed = Papa.parse<string[]>(text, { skipEmptyLines: false, delimiter: guessDelimiter(text) });
   const rowErrors = new Map<number, string[]>();
   for (const err of parsed.errors) {
     if (typeof err.row === "number") rowErrors.set(err.row, [...(rowErrors.get(err.row) ?? []), `The row could not be read (${err.message}).`]);

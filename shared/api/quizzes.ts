@@ -154,7 +154,12 @@ const UNIT_LABELS: Record<string, string> = {
   s: "s",
 };
 
-/** How a unit token from a quiz definition is shown to learners. */
+/** How a unit token from a quiz definition is shown to learners in the unit menu. */
 export function unitLabel(unit: string): string {
   return UNIT_LABELS[unit] ?? unit;
+}
+
+/** The unit written after a number (" °C", " µm"); nothing for dimensionless answers. */
+export function unitSuffix(unit: string): string {
+  return unit === "1" || unit === "" ? "" : ` ${unitLabel(unit)}`;
 }

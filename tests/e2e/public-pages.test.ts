@@ -86,7 +86,7 @@ describe("phone navigation", () => {
     await expect(menuButton.getAttribute("aria-expanded")).resolves.toBe("true");
     const phoneNav = page.getByRole("navigation", { name: "Main, phone" });
     await expect(phoneNav.isVisible()).resolves.toBe(true);
-    await screenshot(page, "menu-open-390");
+    await screenshot(page, "menu-open-390", { fullPage: false });
 
     await page.keyboard.press("Escape");
     await expect(menuButton.getAttribute("aria-expanded")).resolves.toBe("false");
@@ -106,6 +106,7 @@ describe("simulation lab and unknown pages", () => {
   it("lists every simulation and opens one on its own page", async () => {
     const { context, page, problems } = await openPage(browser);
     await page.goto(`${server.baseUrl}/lab`);
+    await page.getByRole("heading", { level: 1, name: /models you can take apart/i }).waitFor();
     const links = page.locator("main ul a");
     await expect(links.count()).resolves.toBe(5);
 

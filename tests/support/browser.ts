@@ -147,10 +147,10 @@ export async function seriousAxeViolations(page: Page): Promise<string[]> {
     .flatMap((v) => v.nodes.map((n) => `${v.id} (${v.impact}): ${n.target.join(" ")} — ${v.help}`));
 }
 
-export async function screenshot(page: Page, name: string): Promise<string> {
+export async function screenshot(page: Page, name: string, options: { fullPage?: boolean } = {}): Promise<string> {
   fs.mkdirSync(ARTIFACTS_DIR, { recursive: true });
   const file = path.join(ARTIFACTS_DIR, `${name}.png`);
-  await page.screenshot({ path: file, fullPage: true });
+  await page.screenshot({ path: file, fullPage: options.fullPage ?? true });
   return file;
 }
 

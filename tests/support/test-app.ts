@@ -67,13 +67,19 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
     DATABASE_PATH: path.join(dir, "test.sqlite"),
     SESSION_SECRET: randomBytes(32).toString("hex"),
     SEED_DEMO: options.seedDemo ? "1" : "0",
-    CLIENT_DIST_DIR: path.resolve(distDir),
+    CLIENT_DIST_DIR: distDir, // relative paths resolve against the repository root
     LOG_LEVEL: "silent",
     ...options.env,
   });
   if (options.configure) config = options.configure(config);
 
-  const built = await createApp(config);
+  let built: GrainEdgeApp;
+  try {
+    built = await createApp(config);
+  } catch (err) {
+    fs.rmSync(dir, { recursive: true, force: true });
+    throw err;
+  }
   let cleaned = false;
   return {
     ...built,
@@ -81,8 +87,11 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
     async cleanup() {
       if (cleaned) return;
       cleaned = true;
-      await built.close();
-      fs.rmSync(dir, { recursive: true, force: true });
+      try {
+        await built.close();
+      } finally {
+        fs.rmSync(dir, { recursive: true, force: true });
+      }
     },
   };
 }

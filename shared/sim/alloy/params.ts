@@ -8,6 +8,7 @@ import type { Composition } from "../../metallurgy/composition";
 import { findGrade } from "../../metallurgy/grades";
 import { ELEMENT_RANGE_MASS_PCT, type RangedElement } from "./element-ranges";
 import { isGradeId } from "./grade-composition";
+import { AUSTENITIZING_RANGE_C } from "./austenitizing";
 
 export const ALLOY_ELEMENTS = ["C", "Cr", "V", "W", "Mo", "Mn", "Si", "Ni", "N"] as const satisfies readonly RangedElement[];
 export type AlloyElement = (typeof ALLOY_ELEMENTS)[number];
@@ -49,6 +50,8 @@ export const paramsSchema = z.strictObject({
     .default(() => DEFAULT_ALLOYS.map((a) => ({ ...a }))),
   /** Temperature of the sub-zero treatment after the quench, °C (dry ice about −78, liquid nitrogen −196). */
   coldTreatmentC: z.number().min(COLD_TREATMENT_RANGE_C.min).max(COLD_TREATMENT_RANGE_C.max).default(-80),
+  /** One hardening temperature for every alloy, °C; absent = the typical temperature of each alloy's family. */
+  austenitizingTempC: z.number().min(AUSTENITIZING_RANGE_C.min).max(AUSTENITIZING_RANGE_C.max).optional(),
 });
 
 export type AlloyParamsInput = z.input<typeof paramsSchema>;

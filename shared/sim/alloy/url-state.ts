@@ -10,6 +10,7 @@ import { ALLOY_ELEMENTS, MAX_ALLOYS, paramsSchema, type AlloyElement, type Alloy
 
 export const ALLOY_KEY = "a";
 export const COLD_KEY = "cold";
+export const AUSTENITIZING_KEY = "aus";
 
 export function encodeAlloySpec(spec: AlloySpec): string {
   if (isGradeSpec(spec)) return spec.grade;
@@ -44,6 +45,7 @@ export function encodeAlloyParams(params: AlloyParams): string {
   for (const spec of params.alloys) search.append(ALLOY_KEY, encodeAlloySpec(spec));
   const defaults = paramsSchema.parse({});
   if (params.coldTreatmentC !== defaults.coldTreatmentC) search.set(COLD_KEY, formatNumber(params.coldTreatmentC));
+  if (params.austenitizingTempC !== undefined) search.set(AUSTENITIZING_KEY, formatNumber(params.austenitizingTempC));
   return search.toString();
 }
 
@@ -58,7 +60,8 @@ export function decodeAlloyParams(search: string | URLSearchParams): DecodedAllo
   const query = typeof search === "string" ? new URLSearchParams(search) : search;
   const values = query.getAll(ALLOY_KEY);
   const coldRaw = query.get(COLD_KEY);
-  if (values.length === 0 && coldRaw === null) return { params: null, problems: [] };
+  const ausRaw = query.get(AUSTENITIZING_KEY);
+  if (values.length === 0 && coldRaw === null && ausRaw === null) return { params: null, problems: [] };
 
   const problems: string[] = [];
   const alloys: AlloySpec[] = [];
@@ -78,11 +81,22 @@ export function decodeAlloyParams(search: string | URLSearchParams): DecodedAllo
     if (Number.isFinite(cold)) candidate.coldTreatmentC = cold;
     else problems.push(`The cold-treatment temperature "${coldRaw}" could not be read.`);
   }
-  const parsed = paramsSchema.safeParse(candidate);
-  if (parsed.success) return { params: parsed.data, problems };
-  // Only coldTreatmentC can still be wrong here (every alloy was validated on its own).
-  problems.push("The cold-treatment temperature in the link is outside −196 to 0 °C and was reset.");
-  return { params: paramsSchema.parse({ alloys: candidate.alloys }), problems };
+  if (ausRaw !== null) {
+    const aus = Number(ausRaw);
+    if (Number.isFinite(aus)) candidate.austenitizingTempC = aus;
+    else problems.push(`The hardening temperature "${ausRaw}" could not be read.`);
+  }
+  // Every alloy was validated on its own; only the two temperatures can still be out of range.
+  for (const [key, message] of [
+    ["coldTreatmentC", "The cold-treatment temperature in the link is outside −196 to 0 °C and was reset."],
+    ["austenitizingTempC", "The hardening temperature in the link is outside 760–1250 °C; typical temperatures are used."],
+  ] as const) {
+    if (key in candidate && !paramsSchema.safeParse({ [key]: candidate[key] }).success) {
+      delete candidate[key];
+      problems.push(message);
+    }
+  }
+  return { params: paramsSchema.parse(candidate), problems };
 }
 
 /** Shortest exact decimal for a slider value (at most 3 decimals; steps are ≥ 0.01). */

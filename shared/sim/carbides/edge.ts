@@ -3,20 +3,20 @@ import type { BaseField, VisibleField } from "./field";
 
 /**
  * Edge model constants. [App] choices of this simulation (no source): a 40° included edge angle (common
- * practice for knives is about 30–40°, [Trade]), a 0.25 µm grid, and abrasion doses tuned for the animation.
+ * practice for knives is about 30–40°, [Trade]), a 0.125 µm grid, and abrasion doses tuned for the animation.
  */
 export const EDGE = {
-  windowUm: 40,
-  cellUm: 0.25,
+  windowUm: 20,
+  cellUm: 0.125,
   includedAngleDeg: 40,
   /** Apex this far below the top of the window, µm. */
-  apexDepthUm: 4,
+  apexDepthUm: 2.5,
   /** Depth below the outermost point that an abrasive grain reaches (≈ grain size), µm. */
   contactBandUm: 1,
-  /** Material removed per cutting cycle, in cell volumes, shared by the cells in contact. */
-  wearDosePerCycle: 1.2,
-  /** Material removed per sharpening stroke, in cell volumes. */
-  sharpenDosePerStroke: 8,
+  /** Material removed per cutting cycle, µm² of section, shared by the cells in contact. */
+  wearDoseUm2PerCycle: 0.075,
+  /** Material removed per sharpening stroke, µm² of section. */
+  sharpenDoseUm2PerStroke: 0.5,
   /** Bluntness is measured as the edge width this far below its tip, µm. */
   probeDepthUm: 3,
   /** The edge counts as restored when that width is at most a sharp wedge's plus this margin, µm. */
@@ -49,7 +49,7 @@ export function phaseResistance(hardnessHv: number, abrasiveHv: number): number 
 
 /**
  * Cross-section of a sharp edge cut from the middle of the carbide field: a wedge whose cells are matrix
- * or carbide (the visible particles, rasterised on a 0.25 µm grid).
+ * or carbide (the visible particles, rasterised on a 0.125 µm grid).
  */
 export function createEdge(base: BaseField, visible: VisibleField, matrixHv: number): EdgeState {
   const windowUm = Math.min(EDGE.windowUm, base.widthUm, base.heightUm);
@@ -135,7 +135,7 @@ export function wearCycles(e: EdgeState, cycles: number, abrasiveHv = ABRASIVES.
     if (top >= e.size) break;
     contact.length = 0;
     for (let x = 0; x < e.size; x++) if (tops[x] <= top + band) contact.push(x);
-    const share = EDGE.wearDosePerCycle / contact.length;
+    const share = EDGE.wearDoseUm2PerCycle / (e.cellUm * e.cellUm) / contact.length;
     for (const x of contact) {
       let remove = share;
       // A removed cell passes the rest of its share to the cell below it.
@@ -210,7 +210,7 @@ export function sharpenStrokes(e: EdgeState, stoneHv: number, strokes: number): 
         if (e.phase[x + n * y] !== PHASE.air) contact.push(x + n * y);
       }
     }
-    const share = EDGE.sharpenDosePerStroke / contact.length;
+    const share = EDGE.sharpenDoseUm2PerStroke / (e.cellUm * e.cellUm) / contact.length;
     for (const j of contact) {
       e.material[j] -= share / R[e.phase[j]];
       if (e.material[j] > 0) continue;
@@ -231,7 +231,7 @@ export interface EdgeMetrics {
   apexRecessionUm: number;
   /** Width of the edge 3 µm below its tip, µm (the bluntness; a sharp 40° edge: 2.2 µm). */
   tipWidthUm: number;
-  /** Mean height of carbide-topped columns above matrix-topped columns near the tip, µm (> 0: carbides stand proud). */
+  /** Mean height of carbide-topped above matrix-topped columns across the worn flat, µm (> 0: carbides stand proud). */
   carbideProtrusionUm: number;
   /** True when the tip is as narrow as a freshly sharpened edge. */
   sharp: boolean;
@@ -249,11 +249,14 @@ export function edgeMetrics(e: EdgeState): EdgeMetrics {
   const probe = Math.min(e.size - 1, top + Math.round(EDGE.probeDepthUm / e.cellUm));
   let width = 0;
   for (let x = 0; x < e.size; x++) if (e.phase[x + e.size * probe] !== PHASE.air) width++;
-  // Protrusion among the columns near the tip (within 3 µm of the highest point).
-  const near = top + Math.round(3 / e.cellUm);
+  // Protrusion across the worn flat (from the first to the last column the counter-face reaches):
+  // mean height of carbide-topped columns above matrix-topped ones.
+  const band = Math.max(1, Math.round(EDGE.contactBandUm / e.cellUm));
+  let first = e.size, last = -1;
+  for (let x = 0; x < e.size; x++) if (tops[x] <= top + band) { first = Math.min(first, x); last = x; }
   let carbideSum = 0, carbideN = 0, matrixSum = 0, matrixN = 0;
-  for (let x = 0; x < e.size; x++) {
-    if (tops[x] > near) continue;
+  for (let x = first; x <= last; x++) {
+    if (tops[x] >= e.size) continue;
     const ph = e.phase[x + e.size * tops[x]];
     if (ph >= 2) { carbideSum += tops[x]; carbideN++; } else if (ph === PHASE.matrix) { matrixSum += tops[x]; matrixN++; }
   }

@@ -53,7 +53,7 @@ function InstructorOverview({ summary }: { summary: InstructorSummary }) {
           This term
         </h2>
         <StatGrid className="mt-4 md:grid-cols-3">
-          <Stat label="Active cohorts" value={active.length} tone="quench" />
+          <Stat label="Active cohorts" value={active.length} tone="quench" className="col-span-2 md:col-span-1" />
           <Stat label="Students" value={students} detail="in active cohorts" />
           <Stat label="Assignments set" value={assignments} detail="in active cohorts" />
         </StatGrid>

@@ -6,12 +6,13 @@ interface StatProps {
   value: ReactNode;
   detail?: ReactNode;
   tone?: "default" | "ember" | "quench";
+  className?: string;
 }
 
 /** One key number, set in the mono face like a gauge reading. */
-export function Stat({ label, value, detail, tone = "default" }: StatProps) {
+export function Stat({ label, value, detail, tone = "default", className }: StatProps) {
   return (
-    <div className="rounded-lg border border-bone-300 bg-white p-4 shadow-card md:p-5">
+    <div className={cx("rounded-lg border border-bone-300 bg-white p-4 shadow-card md:p-5", className)}>
       <dt className="text-sm font-medium text-soot-600">{label}</dt>
       <dd
         className={cx(

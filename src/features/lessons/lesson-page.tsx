@@ -168,9 +168,9 @@ function LessonView({ position, Content, savedChecks, savedSections, lastSection
                   <p>
                     Welcome back. You stopped at <strong>{resumeTitle}</strong>.
                   </p>
-                  <div className="flex gap-2">
+                  <div className="flex flex-wrap gap-2">
                     <button type="button" onClick={resume} className={buttonClasses("primary")}>
-                      Continue where you left off
+                      Continue reading
                     </button>
                     <button type="button" onClick={() => setResumeOffered(false)} className={buttonClasses("ghost")}>
                       Start at the top

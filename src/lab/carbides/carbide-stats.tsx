@@ -49,7 +49,7 @@ export function CarbideStats({ sim, edge, restore }: CarbideStatsProps) {
           ) : (
             <p className="text-soot-600">Counting…</p>
           )}
-          <p className="mt-1 text-xs text-soot-600">Model counts on a 40 µm section, not a time you will measure at the bench.</p>
+          <p className="mt-1 text-xs text-soot-600">Model counts on a 20 µm section, not a time you will measure at the bench.</p>
         </div>
       ) : null}
     </div>

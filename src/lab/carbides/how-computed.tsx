@@ -30,9 +30,9 @@ export function CarbidesHowComputed() {
         about 1.2 times harder than it (it then cannot scratch it). The edge-retention index sums this over the phases
         against quartz; the sharpening-effort index does the same against the stone. Both are relative model numbers
         (1 = a single phase of 700 HV), not lifetimes or times. The edge view applies the same resistances cell by cell to
-        a 40° edge on a 0.25 µm grid: quartz-loaded stock presses on the tip and wears what it touches, so soft matrix
+        a 40° edge on a 0.125 µm grid: quartz-loaded stock presses on the tip and wears what it touches, so soft matrix
         recedes and hard carbides stand proud. The sharpening view grinds both bevels on the chosen stone until the
-        edge is as narrow as when new, and counts model strokes. Carbides are assumed to stay anchored (no pull-out);
+        edge is as narrow as when new, and counts model strokes (a 20 µm section). Carbides are assumed to stay anchored (no pull-out);
         toughness, chipping, edge geometry and corrosion are left out.
       </p>
       <h3>Sources</h3>

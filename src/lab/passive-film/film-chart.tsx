@@ -32,7 +32,7 @@ export function FilmChart({ timeS, meanFilmNm }: { timeS: number; meanFilmNm: nu
           <LineChart data={data} margin={{ top: 8, right: 12, bottom: 4, left: 0 }} accessibilityLayer={false}>
             <CartesianGrid stroke="#ebe3d5" />
             <XAxis dataKey="t" type="number" scale="log" domain={[T_MIN_S, T_MAX_S]} ticks={TICKS} tickFormatter={(v: number) => TICK_LABEL[v] ?? ""} tick={{ fontSize: 11, fill: "#38322c" }} allowDataOverflow />
-            <YAxis domain={[0.8, 3.2]} ticks={[1, 1.5, 2, 2.5, 3]} tick={{ fontSize: 11, fill: "#38322c" }} width={44} unit=" nm" />
+            <YAxis domain={[0.8, 3.2]} ticks={[1, 2, 3]} tick={{ fontSize: 11, fill: "#38322c" }} width={44} unit=" nm" allowDataOverflow />
             <ReferenceArea y1={PASSIVE_FILM_OBSERVED_RANGE_NM.min} y2={PASSIVE_FILM_OBSERVED_RANGE_NM.max} fill="#c7dcea" fillOpacity={0.35} />
             <Line dataKey="direct" stroke="#214c69" strokeWidth={2.5} dot={false} isAnimationActive={false} />
             <Line dataKey="inverse" stroke="#9a3e08" strokeWidth={2} strokeDasharray="6 4" dot={false} isAnimationActive={false} />

@@ -50,8 +50,8 @@ export function MicroField({ kind, volumeFraction, carbideSizeUm, armSpacingUm, 
       const width = Math.max(1.5, length / 6);
       // Boundaries: a jittered square grid of cells λ2 across, at least one line each way.
       const lines: [number, number, number, number][] = [];
-      const offset = rng() * spacing;
-      for (let p = offset % spacing; p < fieldUm + spacing; p += spacing) {
+      // Start inside the field so at least one boundary crosses it, however coarse the cells.
+      for (let p = rng() * Math.min(spacing, fieldUm * 0.8) + fieldUm * 0.1 * Number(spacing > fieldUm); p < fieldUm; p += spacing) {
         const a = p + (rng() - 0.5) * spacing * 0.3;
         const b = p + (rng() - 0.5) * spacing * 0.3;
         lines.push([0, a, fieldUm, b], [a, 0, b, fieldUm]);

@@ -60,7 +60,8 @@ export function TowerCanvas({ ref, classes, layout, towerRef, gasLabel, widthPx,
   }, [classes, layout, stale, widthPx]);
 
   const markers = useMemo(() => freezeMarkers(classes), [classes]);
-  const yOf = (fallM: number) => top + (fallM / layout.heightM) * (bottom - top);
+  // Square-root depth scale: most droplets freeze in the first few per cent of the tower.
+  const yOf = (fallM: number) => top + Math.sqrt(Math.max(0, Math.min(1, fallM / layout.heightM))) * (bottom - top);
 
   const drawStatic = (ctx: Konva.Context) => {
     const c = ctx._context;
@@ -104,9 +105,11 @@ export function TowerCanvas({ ref, classes, layout, towerRef, gasLabel, widthPx,
     c.lineWidth = 1;
     c.textAlign = "right";
     c.font = "500 11px 'JetBrains Mono Variable', ui-monospace, monospace";
-    for (let k = 0; k <= 4; k++) {
-      const fall = (layout.heightM * k) / 4;
+    let lastY = -Infinity;
+    for (const fall of depthTicks(layout.heightM)) {
       const y = yOf(fall);
+      if (y - lastY < 20) continue;
+      lastY = y;
       c.beginPath();
       c.moveTo(chamberX - 5, y);
       c.lineTo(chamberX, y);
@@ -118,7 +121,7 @@ export function TowerCanvas({ ref, classes, layout, towerRef, gasLabel, widthPx,
     c.rotate(-Math.PI / 2);
     c.textAlign = "center";
     c.font = "500 11px 'Inter Variable', system-ui, sans-serif";
-    c.fillText("distance below the nozzle", 0, 0);
+    c.fillText("distance below the nozzle (√ scale)", 0, 0);
     c.restore();
     // Where the fine, median and coarse droplets are solid.
     c.font = "500 11px 'Inter Variable', system-ui, sans-serif";
@@ -159,7 +162,7 @@ export function TowerCanvas({ ref, classes, layout, towerRef, gasLabel, widthPx,
       for (const d of tower.droplets) {
         dropletAt(d, cls, tower.timeS, v);
         const depth = Math.min(1, v.fallM / lay.heightM);
-        const y = top + depth * (bottom - top);
+        const y = top + Math.sqrt(depth) * (bottom - top);
         const x = cx + d.spread * (0.04 + 0.44 * Math.sqrt(depth)) * (chamberW / 2);
         const r = Math.max(1.3, Math.min(6.5, 1.3 + 2.6 * Math.log10(v.diameterM / 8e-6)));
         c.beginPath();
@@ -194,6 +197,12 @@ export function TowerCanvas({ ref, classes, layout, towerRef, gasLabel, widthPx,
       </Stage>
     </div>
   );
+}
+
+function depthTicks(heightM: number): number[] {
+  const out = [0];
+  for (const m of [0.005, 0.01, 0.02, 0.05, 0.1, 0.2, 0.5, 1, 2, 5, 10, 20]) if (m <= heightM + 1e-9) out.push(m);
+  return out;
 }
 
 function formatDepth(m: number): string {

@@ -35,15 +35,15 @@ export function TransportBar({ playing, onPlayPause, onStep, onReset, speed, spe
         <span aria-hidden="true" className="font-mono">↺</span>
         Reset
       </button>
-      <div className="ml-auto">
-        <label htmlFor={speedId} className="block text-xs font-semibold text-soot-700">
+      <div className="flex basis-full items-center gap-2">
+        <label htmlFor={speedId} className="text-sm font-semibold text-soot-800">
           Speed
         </label>
         <select
           id={speedId}
           value={speed}
           onChange={(e) => onSpeed(Number(e.target.value))}
-          className="min-h-10 rounded-sm border border-soot-500/60 bg-white px-2 text-sm"
+          className="min-h-10 grow rounded-sm border border-soot-500/60 bg-white px-2 text-sm"
         >
           {speeds.map((s) => (
             <option key={s} value={s}>

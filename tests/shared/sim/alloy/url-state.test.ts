@@ -47,6 +47,8 @@ describe("alloy explorer URL state", () => {
   it("resets an out-of-range cold treatment but keeps the alloys", () => {
     const decoded = decodeAlloyParams("a=M2&cold=40");
     expect(decoded.params).toEqual({ alloys: [{ grade: "M2" }], coldTreatmentC: -80 });
+    expect(decodeAlloyParams("a=M2&aus=1500").params?.austenitizingTempC).toBeUndefined();
+    expect(decodeAlloyParams("a=M2&aus=1180").params?.austenitizingTempC).toBe(1180);
     expect(decoded.problems).toHaveLength(1);
   });
 
