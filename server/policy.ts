@@ -77,6 +77,17 @@ export const ROUTE_POLICY: readonly RoutePolicy[] = [
   { method: "GET", path: "/api/admin/outbox", access: ["admin"] },
   { method: "GET", path: "/api/admin/outbox/:messageId", access: ["admin"] },
   { method: "POST", path: "/api/admin/jobs/run", access: ["admin"] },
+  { method: "GET", path: "/api/notebook/entries", access: "authenticated", object: "own entries only (req.user)" },
+  { method: "POST", path: "/api/notebook/entries", access: "authenticated", object: "created for req.user; a saved alloy must be one's own" },
+  { method: "GET", path: "/api/notebook/entries/:id", access: "authenticated", object: "owner, instructors of the owner's cohorts, admins (loadOwned, else 404)" },
+  { method: "PUT", path: "/api/notebook/entries/:id", access: "authenticated", object: "owner only (loadOwned, else 404)" },
+  { method: "DELETE", path: "/api/notebook/entries/:id", access: "authenticated", object: "owner only (loadOwned, else 404)" },
+  { method: "POST", path: "/api/notebook/entries/:id/files", access: "authenticated", object: "owner only (loadOwned, else 404); per-user quota", body: "multipart" },
+  { method: "GET", path: "/api/notebook/files/:fileId", access: "authenticated", object: "owner, instructors of the owner's cohorts, admins (else 404); sandboxed response" },
+  { method: "GET", path: "/api/notebook/files/:fileId/thumb", access: "authenticated", object: "owner, instructors of the owner's cohorts, admins (else 404); sandboxed response" },
+  { method: "DELETE", path: "/api/notebook/files/:fileId", access: "authenticated", object: "owner only (loadOwned, else 404)" },
+  { method: "POST", path: "/api/notebook/entries/:id/review", access: ["instructor", "admin"], object: "instructor of a cohort the owner is in, or admin (loadOwned, else 404)" },
+  { method: "GET", path: "/api/notebook/review", access: ["instructor", "admin"], object: "entries of students in own cohorts (instructor) or all (admin)" },
 ];
 
 function pathPattern(path: string): RegExp {

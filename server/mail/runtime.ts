@@ -8,18 +8,16 @@
  * fake shuts down first. (An explicit `await closeTeachingRuntime(db)` in createApp's close()
  * would do the same and is the cleaner place for it.)
  */
+import type { JobsRunResult } from "../../shared/api/admin";
 import type { AppContext } from "../context";
 import type { Db } from "../db/database";
 import { InvitationDispatcher } from "../services/invitations-dispatch";
 import { getCourseCatalog } from "../services/lessons/course";
-import { runReminders, type ReminderRunResult } from "../services/reminders";
+import { runReminders } from "../services/reminders";
 import { createMailer, type Mailer } from "./mailer";
 import { mailSettings, type MailSettings } from "./settings";
 
-export interface JobsResult {
-  invitationsAttempted: number;
-  reminders: ReminderRunResult;
-}
+export type JobsResult = JobsRunResult;
 
 export interface TeachingRuntime {
   settings: MailSettings;

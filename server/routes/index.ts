@@ -7,6 +7,7 @@ import { createLessonsRouter, createModulesRouter } from "./lessons";
 import { createQuizzesRouter } from "./quizzes";
 import { createAlloysRouter, createLessonAlloysRouter } from "./alloys";
 import { teachingRouters } from "./teaching";
+import { createNotebookRouter } from "./notebook";
 
 /**
  * API routers, mounted under /api after the session, CSRF and JSON-body middleware.
@@ -29,5 +30,6 @@ export function apiRouters(ctx: AppContext, auth: AuthRouterDeps): [string, Rout
     ["/alloys", createAlloysRouter(ctx)],
     ["/lessons", createLessonAlloysRouter(ctx)],
     ...teachingRouters(ctx),
+    ["/notebook", createNotebookRouter(ctx)],
   ];
 }

@@ -148,10 +148,15 @@ export async function myAssignments(db: Db, catalog: CourseCatalog, userId: numb
   });
 }
 
-/** The instructor dashboard: active cohorts with who is behind and what is due in the next week. */
+/**
+ * The instructor dashboard: every visible cohort (archived ones last, without figures), who is
+ * behind and what is due in the next week in the active ones.
+ */
 export async function teachingOverview(db: Db, catalog: CourseCatalog, user: PublicUser, now = new Date()): Promise<TeachingOverview> {
   return db.read(async () => {
-    const cohorts = await visibleCohorts(db, user, "exclude");
+    const all = await visibleCohorts(db, user, "include");
+    const archivedItems = (await toListItems(db, all.filter((c) => c.archivedAt))).map((item) => ({ ...item, behindCount: 0, nextDueAt: null, completion: 0 }));
+    const cohorts = all.filter((c) => !c.archivedAt);
     const items = await toListItems(db, cohorts);
     const { Enrollment, Assignment, Module, User } = db.models;
     const ids = cohorts.map((c) => c.id);
@@ -216,6 +221,6 @@ export async function teachingOverview(db: Db, catalog: CourseCatalog, user: Pub
     });
     behind.sort((a, b) => b.overdue.length - a.overdue.length || a.student.displayName.localeCompare(b.student.displayName));
     dueSoon.sort((a, b) => a.dueAt.localeCompare(b.dueAt));
-    return { cohorts: overview, behind, dueSoon };
+    return { cohorts: [...overview, ...archivedItems], behind, dueSoon };
   });
 }

@@ -83,3 +83,10 @@ export interface OutboxMessageDetail extends OutboxSummary {
   messageId: string | null;
   sizeBytes: number;
 }
+
+/** POST /api/admin/jobs/run: what the background jobs did when run now. */
+export interface JobsRunResult {
+  /** Pending invitations whose retry time had come, and were sent again. */
+  invitationsAttempted: number;
+  reminders: { candidates: number; sent: number; failed: number; skipped: number };
+}

@@ -14,6 +14,8 @@ import { HydrateFallback } from "./routes/hydrate-fallback";
 import { Component as LandingPage } from "./routes/landing";
 import { NotFoundPage } from "./routes/not-found";
 import { RouteError } from "./routes/route-error";
+import { adminRoutes } from "@/features/admin/routes";
+import { teachRoutes } from "@/features/teach/routes";
 
 export function createAppRouter(queryClient: QueryClient) {
   /** A role's home: check the session and role, and start fetching the overview in parallel with the page code. */
@@ -44,12 +46,13 @@ export function createAppRouter(queryClient: QueryClient) {
             },
             { path: paths.lab, lazy: () => import("./routes/lab-index") },
             { path: routePatterns.labSimulation, lazy: () => import("./routes/lab-simulation") },
+            { path: "/invite/:token", lazy: () => import("@/features/invite/accept-page") },
             {
               Component: ProtectedOutlet,
               children: [
                 { path: paths.learn, loader: homeLoader("student"), lazy: () => import("./routes/learn") },
-                { path: paths.teach, loader: homeLoader("instructor"), lazy: () => import("./routes/teach") },
-                { path: paths.admin, loader: homeLoader("admin"), lazy: () => import("./routes/admin") },
+                ...teachRoutes(queryClient),
+                ...adminRoutes(queryClient, { loader: homeLoader("admin"), lazy: () => import("./routes/admin") }),
                 { path: paths.account, loader: requireUser(queryClient), lazy: () => import("./routes/account") },
                 // Lessons (features/lessons): the course outline and one lesson.
                 { path: "/learn/modules", loader: requireUser(queryClient), lazy: () => import("@/features/lessons/modules-page") },

@@ -72,12 +72,12 @@ describe("carbide simulation", () => {
     await fontsReady(page);
     await screenshot(page, "lab-carbides-edge-1280");
 
-    await page.getByLabel("Sharpening", { exact: true }).check({ force: true });
+    await page.getByRole("radio", { name: "Sharpening", exact: true }).check({ force: true });
     await waitForSummary(page, /Sharpening on aluminium oxide/);
     await page.getByText(/Diamond: \d+/).waitFor({ timeout: 60_000 });
     await screenshot(page, "lab-carbides-sharpen-1280");
 
-    await page.getByLabel("Index charts", { exact: true }).check({ force: true });
+    await page.getByRole("radio", { name: "Index charts", exact: true }).check({ force: true });
     await page.getByRole("table").waitFor();
     await expect(page.getByRole("rowheader", { name: "AISI A11" }).isVisible()).resolves.toBe(true);
     await fontsReady(page);

@@ -161,15 +161,13 @@ describe("lesson and quiz, as the demo student", () => {
         await panel.getByTestId("quiz-result").first().waitFor({ timeout: 20_000 });
         await readThrough(page);
         await page.locator(".sim-frame input[type=range]").first().waitFor({ timeout: 30_000 });
-        // The score and the first questions' feedback (the whole panel is several screens tall).
-        await page.waitForTimeout(500);
-        const box = (await panel.boundingBox())!;
-        const top = await page.evaluate(() => window.scrollY);
-        await page.screenshot({
-          path: `tests/artifacts/quiz-result-${viewport.width}.png`,
-          fullPage: true,
-          clip: { x: box.x, y: box.y + top, width: box.width, height: Math.min(box.height, 1800) },
-        });
+        // The score and the first questions' feedback (the whole panel is several screens tall):
+        // a tall viewport with the panel scrolled to its top.
+        await page.setViewportSize({ width: viewport.width, height: 1600 });
+        await panel.evaluate((el) => el.scrollIntoView({ block: "start" }));
+        await page.waitForTimeout(300);
+        await page.screenshot({ path: `tests/artifacts/quiz-result-${viewport.width}.png` });
+        await page.setViewportSize(viewport);
 
         const violations = await seriousAxeViolations(page);
         expect(violations, `${name}:\n${violations.join("\n")}`).toEqual([]);

@@ -1,6 +1,7 @@
 import { initial } from "./0001-initial";
 import { savedAlloys } from "./0005-saved-alloys";
 import { teaching } from "./0020-teaching";
+import { notebook } from "./0040-notebook";
 import type { Migration } from "./types";
 
 /**
@@ -18,6 +19,7 @@ export const MIGRATIONS: readonly Migration[] = [
   initial,
   savedAlloys,
   teaching,
+  notebook,
 ];
 
 export type { Migration, MigrationContext } from "./types";

@@ -14,6 +14,9 @@ import { lessonAlloyModel } from "./lesson-alloy";
 import { invitationModel } from "./invitation";
 import { outboxMessageModel } from "./outbox-message";
 import { reminderLogModel } from "./reminder-log";
+import { notebookEntryModel } from "./notebook-entry";
+import { notebookFileModel } from "./notebook-file";
+import { notebookCommentModel } from "./notebook-comment";
 
 /**
  * Model registry. Models are defined per Sequelize instance (not with global `Model.init`), so
@@ -41,6 +44,9 @@ const REGISTRY = {
   Invitation: invitationModel,
   OutboxMessage: outboxMessageModel,
   ReminderLog: reminderLogModel,
+  NotebookEntry: notebookEntryModel,
+  NotebookFile: notebookFileModel,
+  NotebookComment: notebookCommentModel,
 };
 
 type Registry = typeof REGISTRY;

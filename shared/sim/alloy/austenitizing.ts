@@ -20,7 +20,8 @@ export function typicalAustenitizingTempC(comp: Composition): AusteniteChoice {
   const tungstenEquivalent = (comp.W ?? 0) + 2 * (comp.Mo ?? 0);
   if (tungstenEquivalent >= 8 && cr >= 3) return { tempC: 1190, family: "high-speed steel" };
   if (cr >= 10.5 && (comp.Ni ?? 0) >= 6) return { tempC: 1050, family: "austenitic stainless (not hardenable by quenching)" };
-  if (cr >= 10.5) return { tempC: 1050, family: "martensitic stainless steel" };
+  if (cr >= 10.5 && c <= 1.2) return { tempC: 1050, family: "martensitic stainless steel" };
+  if (cr >= 10.5) return { tempC: 1020, family: "high-chromium cold-work tool steel" };
   if (v >= 4) return { tempC: 1120, family: "high-vanadium tool steel" };
   if (cr >= 4 || tungstenEquivalent >= 2) return { tempC: 1010, family: "alloyed tool steel" };
   if (c >= 0.9) return { tempC: 800, family: "high-carbon steel" };

@@ -121,8 +121,9 @@ function columnTops(e: EdgeState): Int32Array {
 /**
  * Cutting cycles against quartz-loaded stock: a flat counter-face presses on the edge from above and
  * abrasive grains reach `contactBandUm` below the highest point. Each cycle removes a fixed dose of
- * material, shared by the surface cells in contact, each losing dose/(n·R) where R is its phase's
- * resistance to quartz (core wear index). Soft matrix recedes; hard carbides stand proud.
+ * material, shared by the columns in contact in proportion to how deep the counter-face presses into them;
+ * each top cell loses its share divided by R, its phase's resistance to quartz (core wear index).
+ * Soft matrix recedes; hard carbides stand proud.
  */
 export function wearCycles(e: EdgeState, cycles: number, abrasiveHv = ABRASIVES.quartz.typicalHv): EdgeState {
   const R = resistances(e, abrasiveHv);
@@ -134,10 +135,16 @@ export function wearCycles(e: EdgeState, cycles: number, abrasiveHv = ABRASIVES.
     for (let x = 0; x < e.size; x++) if (tops[x] < top) top = tops[x];
     if (top >= e.size) break;
     contact.length = 0;
-    for (let x = 0; x < e.size; x++) if (tops[x] <= top + band) contact.push(x);
-    const share = EDGE.wearDoseUm2PerCycle / (e.cellUm * e.cellUm) / contact.length;
+    let weightSum = 0;
+    for (let x = 0; x < e.size; x++) {
+      if (tops[x] > top + band) continue;
+      contact.push(x);
+      weightSum += top + band + 1 - tops[x];
+    }
+    // Load shared like an elastic foundation: the deeper the counter-face presses into a column, the more it takes.
+    const dose = EDGE.wearDoseUm2PerCycle / (e.cellUm * e.cellUm);
     for (const x of contact) {
-      let remove = share;
+      let remove = (dose * (top + band + 1 - tops[x])) / weightSum;
       // A removed cell passes the rest of its share to the cell below it.
       while (remove > 0 && tops[x] < e.size) {
         const j = x + e.size * tops[x];
@@ -249,11 +256,11 @@ export function edgeMetrics(e: EdgeState): EdgeMetrics {
   const probe = Math.min(e.size - 1, top + Math.round(EDGE.probeDepthUm / e.cellUm));
   let width = 0;
   for (let x = 0; x < e.size; x++) if (e.phase[x + e.size * probe] !== PHASE.air) width++;
-  // Protrusion across the worn flat (from the first to the last column the counter-face reaches):
+  // Protrusion across the worn flat (columns within two contact bands of the highest point):
   // mean height of carbide-topped columns above matrix-topped ones.
   const band = Math.max(1, Math.round(EDGE.contactBandUm / e.cellUm));
   let first = e.size, last = -1;
-  for (let x = 0; x < e.size; x++) if (tops[x] <= top + band) { first = Math.min(first, x); last = x; }
+  for (let x = 0; x < e.size; x++) if (tops[x] <= top + 2 * band) { first = Math.min(first, x); last = x; }
   let carbideSum = 0, carbideN = 0, matrixSum = 0, matrixN = 0;
   for (let x = first; x <= last; x++) {
     if (tops[x] >= e.size) continue;

@@ -68,3 +68,11 @@ export function resolveIngotSimParams(params: IngotSimParams): ResolvedIngotSimP
 export function parseIngotSimParams(input: unknown): ResolvedIngotSimParams {
   return resolveIngotSimParams(paramsSchema.parse(input ?? {}));
 }
+
+/** Back to the contract's names (for a quiz task reading the learner's settings, or a URL). */
+export function toIngotParams(sim: ResolvedIngotSimParams): IngotSimParamsInput {
+  const base = { sizeMm: sim.sizeMm, mould: sim.mould, mixing: sim.mixing, element: sim.element };
+  if (sim.gradeId) return { grade: sim.gradeId, ...base };
+  const composition = Object.fromEntries(INGOT_ELEMENTS.map((el) => [el, sim.composition[el] ?? 0]));
+  return { ...composition, ...base };
+}

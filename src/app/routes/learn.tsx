@@ -7,6 +7,7 @@ import { Stat, StatGrid } from "@/components/ui/stat";
 import { firstName, formatDate, plural } from "@/features/home/format";
 import { LabShortcuts } from "@/features/home/lab-shortcuts";
 import { QueryState } from "@/features/home/summary-state";
+import { DueAssignments } from "@/features/teach/due-assignments";
 
 export function Component() {
   const { data: user } = useMe();
@@ -22,6 +23,7 @@ export function Component() {
       />
       <PageBody className="grid gap-8 lg:grid-cols-[1fr_20rem] lg:items-start">
         <div className="space-y-10">
+          <DueAssignments />
           <QueryState query={summary}>
             {(data) => (data.role === "student" ? <StudentOverview summary={data} /> : <WrongSummary />)}
           </QueryState>

@@ -12,6 +12,7 @@ import { buttonClasses } from "@/components/ui/button";
 import { Spinner } from "@/components/ui/spinner";
 import { mdxComponents } from "@/components/mdx/components";
 import { LessonContextProvider, type LessonContextValue } from "@/components/mdx/lesson-context";
+import { useFocusableOverflow } from "@/components/mdx/use-focusable-overflow";
 import { findLesson } from "./course-outline";
 import { lessonPaths } from "./lesson-paths";
 import { useLessonModule, type LessonModule } from "./lesson-modules";
@@ -78,6 +79,7 @@ function LessonView({ position, Content, savedChecks, savedSections, lastSection
     [saver],
   );
   const current = useSectionTracking(article, mounted, onReached);
+  useFocusableOverflow(article, mounted);
 
   // Opening a lesson at #section (from a link or the TOC) scrolls there once the content exists.
   useEffect(() => {

@@ -47,15 +47,15 @@ export const ResultView = forwardRef<HTMLHeadingElement, ResultViewProps>(functi
 function ResultItem({ number, prompt, result }: { number: number; prompt: string; result: QuestionResult }) {
   return (
     <article className={cx("rounded-lg border bg-white p-4 shadow-card", result.correct ? "border-l-4 border-bone-300 border-l-success-700" : "border-l-4 border-bone-300 border-l-danger-700")}>
-      <p className="flex items-start justify-between gap-3">
-        <span className="font-semibold leading-relaxed text-soot-950">
-          <span className="mr-2 font-mono text-sm text-ember-700">Q{number}</span>
-          <InlineMarkdown text={prompt} />
-        </span>
+      <div className="flex items-center justify-between gap-3">
+        <span className="font-mono text-xs font-semibold uppercase tracking-[0.12em] text-ember-700">Question {number}</span>
         <span className={cx("shrink-0 rounded-full px-2.5 py-0.5 text-xs font-bold", result.correct ? "bg-success-100 text-success-700" : "bg-danger-100 text-danger-700")}>
           {result.correct ? "✓ Right" : "✗ Wrong"}
           <span className="sr-only">, {result.pointsAwarded} of {result.points} points</span>
         </span>
+      </div>
+      <p className="mt-1.5 font-semibold leading-relaxed text-soot-950">
+        <InlineMarkdown text={prompt} />
       </p>
       <dl className="mt-3 grid gap-x-4 gap-y-1.5 text-sm sm:grid-cols-[9rem_minmax(0,1fr)]">
         <dt className="text-soot-600">Your answer</dt>

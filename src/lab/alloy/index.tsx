@@ -106,7 +106,8 @@ export default function AlloyExplorer({ initial, onParamsChange }: AlloyExplorer
   const addAlloy = () => {
     if (alloys.length >= MAX_ALLOYS) return;
     const used = new Set(alloys.map((a) => ("grade" in a ? a.grade : "")));
-    const next = DEFAULT_ALLOYS.map((a) => a.grade).concat(["A11", "M2", "52100"]).find((g) => !used.has(g)) ?? "1095";
+    const candidates: string[] = [...DEFAULT_ALLOYS.map((a) => a.grade), "A11", "M2", "52100"];
+    const next = candidates.find((g) => !used.has(g)) ?? "1095";
     setAlloys((old) => [...old, { grade: next }]);
     setSelected(alloys.length);
   };
@@ -177,7 +178,6 @@ export default function AlloyExplorer({ initial, onParamsChange }: AlloyExplorer
         </div>
       </div>
       <LiveSummary text={summary} throttleMs={600} label="Key figures now" />
-      <MemoFigureBoard reports={reports} />
       <div className="grid gap-4 @3xl:grid-cols-2">
         <MemoCarbideChart reports={reports} />
         <div className="space-y-4">
@@ -185,6 +185,7 @@ export default function AlloyExplorer({ initial, onParamsChange }: AlloyExplorer
           <MemoRetainedAusteniteChart reports={reports} coldTreatmentC={coldTreatmentC} />
         </div>
       </div>
+      <MemoFigureBoard reports={reports} />
       <MemoAlloyMethod />
     </section>
   );

@@ -1,7 +1,7 @@
 import { useEffect, useImperativeHandle, useMemo, useRef, type Ref } from "react";
-import { Image as KonvaImage, Layer, Line, Stage, Text } from "react-konva";
+import { Group, Image as KonvaImage, Layer, Line, Stage, Text } from "react-konva";
 import type Konva from "konva";
-import { EDGE, type EdgeState } from "@shared/sim/carbides";
+import { EDGE, PHASE, type EdgeState } from "@shared/sim/carbides";
 import type { CanvasHandle } from "./field-canvas";
 import { measured } from "@/lab/shared-ui/bench-marks";
 import { paintEdge } from "./edge-paint";
@@ -33,6 +33,7 @@ export function EdgeCanvas({ ref, edge, hardened, sizePx, mode, stoneName, label
     return { canvas, ctx, image, pixels: new Uint32Array(image.data.buffer) };
   }, [n]);
   const imageRef = useRef<Konva.Image>(null);
+  const stockRef = useRef<Konva.Group>(null);
 
   const edgeRef = useRef(edge);
   edgeRef.current = edge;
@@ -41,6 +42,11 @@ export function EdgeCanvas({ ref, edge, hardened, sizePx, mode, stoneName, label
       paintEdge(buffer.pixels, edgeRef.current, hardened);
       buffer.ctx.putImageData(buffer.image, 0, 0);
       imageRef.current?.getLayer()?.draw();
+      // The stock rests on the highest point of the edge.
+      if (stockRef.current) {
+        stockRef.current.y(Math.max(0, topRow(edgeRef.current) * (sizePx / n) - 5));
+        stockRef.current.getLayer()?.draw();
+      }
     });
   useImperativeHandle(ref, () => ({ redraw }));
   useEffect(() => { redraw(); }, [buffer, edge, hardened, sizePx]);
@@ -60,10 +66,10 @@ export function EdgeCanvas({ ref, edge, hardened, sizePx, mode, stoneName, label
         <Layer listening={false}>
           <Line points={[half - spread, bottom, half, apex, half + spread, bottom]} stroke="#9a3e08" strokeWidth={1.5} dash={[6, 5]} listening={false} />
           {mode === "edge" ? (
-            <>
-              <Line points={[sizePx * 0.2, 3, sizePx * 0.8, 3]} stroke="#214c69" strokeWidth={5} listening={false} />
-              <Text x={sizePx * 0.2} y={10} width={sizePx * 0.6} align="center" text="quartz-loaded stock presses here" fontSize={12} fill="#214c69" listening={false} />
-            </>
+            <Group ref={stockRef} listening={false}>
+              <Line points={[sizePx * 0.15, 0, sizePx * 0.85, 0]} stroke="#214c69" strokeWidth={4} listening={false} />
+              <Text x={sizePx * 0.15} y={-18} width={sizePx * 0.7} align="center" text="quartz-loaded stock presses here ↓" fontSize={12} fill="#214c69" listening={false} />
+            </Group>
           ) : (
             <Text x={8} y={8} width={sizePx - 16} text={`stone: ${stoneName}, on both bevels`} fontSize={12} fill="#214c69" listening={false} />
           )}
@@ -72,4 +78,10 @@ export function EdgeCanvas({ ref, edge, hardened, sizePx, mode, stoneName, label
       <ScaleBar pxPerUm={sizePx / (n * edge.cellUm)} />
     </div>
   );
+}
+
+/** First row holding any solid cell. */
+function topRow(e: EdgeState): number {
+  for (let j = 0; j < e.phase.length; j++) if (e.phase[j] !== PHASE.air) return Math.floor(j / e.size);
+  return e.size;
 }

@@ -15,18 +15,28 @@ interface IndexChartsProps {
 /** Edge-retention and sharpening-effort indices beside a plain-carbon reference, and every preset on both axes. */
 export function IndexCharts({ label, indices, reference, scatter, currentGradeId, stone }: IndexChartsProps) {
   const bars = [
-    { name: "Edge retention (quartz)", current: round(indices.edgeRetention), reference: round(reference.edgeRetention) },
-    { name: `Sharpening effort (${STONE_NAME[stone]})`, current: round(indices.sharpeningEffort), reference: round(reference.sharpeningEffort) },
+    { name: "Edge retention", current: round(indices.edgeRetention), reference: round(reference.edgeRetention) },
+    { name: "Sharpening effort", current: round(indices.sharpeningEffort), reference: round(reference.sharpeningEffort) },
   ];
-  const points = (scatter ?? []).map((p) => ({ ...p, x: round(p.edgeRetention), y: round(p.sharpeningEffort), tag: p.label.replace(/^(AISI|SAE) /, "") }));
+  // Grades that land on the same point share one mark and one label ("1095, 52100").
+  const merged = new Map<string, GradeIndexPoint & { x: number; y: number; tag: string }>();
+  for (const p of scatter ?? []) {
+    const x = round(p.edgeRetention), y = round(p.sharpeningEffort);
+    const key = `${x}|${y}|${p.gradeId === currentGradeId}`;
+    const tag = p.label.replace(/^(AISI|SAE) /, "");
+    const old = merged.get(key);
+    merged.set(key, old ? { ...old, tag: `${old.tag}, ${tag}` } : { ...p, x, y, tag });
+  }
+  const points = [...merged.values()];
   const current = points.filter((p) => p.gradeId === currentGradeId);
   const others = points.filter((p) => p.gradeId !== currentGradeId);
   return (
-    <div className="grid gap-4 @3xl:grid-cols-2">
+    <div className="grid gap-4">
       <figure className="rounded-md border border-bone-300 bg-white p-3">
         <figcaption className="text-sm font-semibold text-soot-900">This steel beside plain carbon</figcaption>
         <p className="text-xs text-soot-600">
-          Model indices, not lifetimes: 1 = a single 700 HV phase. Solid bars: {label}. Hatched bars: {reference.label}.
+          Model indices, not lifetimes: 1 = a single 700 HV phase. Edge retention against quartz; sharpening effort on{" "}
+          {STONE_NAME[stone]}. Solid bars: {label}. Hatched bars: {reference.label}.
         </p>
         <div className="mt-2 h-56" aria-hidden="true">
           <ResponsiveContainer width="100%" height="100%">
@@ -57,7 +67,7 @@ export function IndexCharts({ label, indices, reference, scatter, currentGradeId
           Right = holds an edge longer against quartz; up = more effort on {STONE_NAME[stone]}. Model indices, not
           lifetimes. {currentGradeId ? "The ringed diamond is the steel shown." : ""}
         </p>
-        <div className="mt-2 h-56" aria-hidden="true">
+        <div className="mt-2 h-72" aria-hidden="true">
           {scatter ? (
             <ResponsiveContainer width="100%" height="100%">
               <ScatterChart margin={{ top: 16, right: 24, bottom: 8, left: 0 }} accessibilityLayer={false}>
@@ -79,7 +89,7 @@ export function IndexCharts({ label, indices, reference, scatter, currentGradeId
         </div>
       </figure>
       {scatter ? (
-        <table className="text-sm @3xl:col-span-2">
+        <table className="text-sm">
           <caption className="sr-only">Edge-retention and sharpening-effort indices of the presets (model indices, not lifetimes)</caption>
           <thead>
             <tr className="text-left text-xs text-soot-600">

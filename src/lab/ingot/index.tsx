@@ -3,6 +3,7 @@ import { z } from "zod";
 import {
   paramsSchema,
   resolveIngotSimParams,
+  toIngotParams,
   type IngotElement,
   type ResolvedIngotSimParams,
 } from "@shared/sim/ingot/params";
@@ -39,6 +40,8 @@ const MemoIngotLegend = memo(IngotLegend);
 export interface IngotSimulationProps {
   /** Initial parameters, e.g. a lesson's preset; names as in content/AUTHORING.md. */
   initial?: Record<string, unknown>;
+  /** Called with the current parameters (contract names) whenever they change. */
+  onParamsChange?: (params: Record<string, unknown>) => void;
 }
 
 const PARAM_KEYS = ["grade", "C", "Cr", "V", "Mo", "Mn", "Si", "sizeMm", "mould", "mixing", "element"] as const;
@@ -56,7 +59,7 @@ function resolveInitial(initial: Record<string, unknown> | undefined): { sim: Re
 
 const reducedMotionNow = () => typeof window !== "undefined" && window.matchMedia?.("(prefers-reduced-motion: reduce)").matches === true;
 
-export default function IngotSimulation({ initial }: IngotSimulationProps) {
+export default function IngotSimulation({ initial, onParamsChange }: IngotSimulationProps) {
   const [{ sim: startSim, error: presetError }] = useState(() => resolveInitial(initial));
   const [sim, setSim] = useState(startSim);
   const reducedMotion = usePrefersReducedMotion();
@@ -66,6 +69,11 @@ export default function IngotSimulation({ initial }: IngotSimulationProps) {
   const [wrapRef, width] = useElementWidth<HTMLDivElement>();
   const canvasRef = useRef<IngotCanvasHandle>(null);
   const element: IngotElement = sim.element;
+  const onParamsChangeRef = useRef(onParamsChange);
+  onParamsChangeRef.current = onParamsChange;
+  useEffect(() => {
+    onParamsChangeRef.current?.(toIngotParams(sim) as Record<string, unknown>);
+  }, [sim]);
 
   // Playback state lives in refs: the animation loop mutates the frame buffers and redraws the
   // canvas directly, and React re-renders only for the summary and the time slider (~4 Hz).

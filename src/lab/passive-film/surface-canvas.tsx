@@ -46,25 +46,26 @@ export function SurfaceCanvas({ ref, state, mode, sizePx, scratchTool, scratchPa
   const modeRef = useRef(mode);
   modeRef.current = mode;
 
-  const redraw = useCallback(() => imageRef.current?.getLayer()?.batchDraw(), []);
+  // Draw synchronously (inside the measured block), not on Konva's next batch.
+  const redraw = useCallback(() => { imageRef.current?.getLayer()?.draw(); }, []);
   const repaintAll = useCallback(() => {
     measured("passive-film:paint", () => {
       paintAll(buffer.pixels, stateRef.current, modeRef.current);
       buffer.ctx.putImageData(buffer.image, 0, 0);
+      redraw();
     });
-    redraw();
   }, [buffer, redraw]);
   const repaintChanged = useCallback(() => {
-    const rect = measured("passive-film:paint", () => {
+    measured("passive-film:paint", () => {
       const r = paintChanged(buffer.pixels, stateRef.current, modeRef.current);
-      if (r) buffer.ctx.putImageData(buffer.image, 0, 0, r.x, r.y, r.width, r.height);
-      return r;
+      if (!r) return;
+      buffer.ctx.putImageData(buffer.image, 0, 0, r.x, r.y, r.width, r.height);
+      redraw();
     });
-    if (rect) redraw();
   }, [buffer, redraw]);
 
   useImperativeHandle(ref, () => ({ paintChanged: repaintChanged, paintAll: repaintAll }), [repaintChanged, repaintAll]);
-  useEffect(() => repaintAll(), [state, mode, sizePx, repaintAll]);
+  useEffect(() => { repaintAll(); }, [state, mode, sizePx, repaintAll]);
 
   const scale = sizePx / L;
   const dragging = useRef<SitePoint | null>(null);

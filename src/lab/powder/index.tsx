@@ -28,6 +28,8 @@ import type { PowderRunInputs } from "./worker-protocol";
 export interface PowderSimulationProps {
   /** Initial parameters, e.g. a lesson's preset; names as in content/AUTHORING.md. */
   initial?: Record<string, unknown>;
+  /** Called with the current parameters (contract names) whenever they change. */
+  onParamsChange?: (params: Record<string, unknown>) => void;
 }
 
 const PARAM_KEYS = ["grade", "medianDiameterUm", "geometricStdDev", "gas", "gasVelocityMPerS", "superheatC", "undercoolingK", "hipPressureMPa", "hipTempC"] as const;
@@ -49,7 +51,7 @@ function resolveInitial(initial: Record<string, unknown> | undefined): { params:
 
 const reducedMotionNow = () => typeof window !== "undefined" && window.matchMedia?.("(prefers-reduced-motion: reduce)").matches === true;
 
-export default function PowderSimulation({ initial }: PowderSimulationProps) {
+export default function PowderSimulation({ initial, onParamsChange }: PowderSimulationProps) {
   const [{ params: start, error: presetError }] = useState(() => resolveInitial(initial));
   const [params, setParams] = useState(start);
   const { hipPressureMPa, hipTempC, ...atomising } = params;
@@ -63,6 +65,13 @@ export default function PowderSimulation({ initial }: PowderSimulationProps) {
   const [wrapRef, width] = useElementWidth<HTMLDivElement>();
   const canvasRef = useRef<TowerCanvasHandle>(null);
   const towerRef = useRef<TowerState>(createTower());
+
+  const onParamsChangeRef = useRef(onParamsChange);
+  onParamsChangeRef.current = onParamsChange;
+  useEffect(() => {
+    const { composition: _composition, ...contract } = params;
+    onParamsChangeRef.current?.(contract);
+  }, [params]);
 
   const layout = useMemo(() => (result ? towerLayout(result.classes) : null), [result]);
   const hip = useMemo(() => hipOutcome(hipPressureMPa, hipTempC), [hipPressureMPa, hipTempC]);

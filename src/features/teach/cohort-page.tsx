@@ -1,0 +1,139 @@
+/**
+ * /teach/cohorts/:cohortId: one cohort. Rename or archive it; its students (remove, move);
+ * invitations by e-mail and roster import; the assignments with due dates and attempt limits.
+ */
+import { useState } from "react";
+import { useParams } from "react-router";
+import { cohortNameSchema, type CohortDetail } from "@shared/api/cohorts";
+import { useCohort, useUpdateCohort } from "@/api/cohorts";
+import { Alert } from "@/components/ui/alert";
+import { Button, ButtonLink } from "@/components/ui/button";
+import { TextField } from "@/components/ui/field";
+import { PageBody, PageHeader } from "@/components/ui/page-header";
+import { messageFor } from "@/features/forms/api-errors";
+import { AssignmentsEditor } from "./assignments-editor";
+import { CohortStudents } from "./cohort-students";
+import { plural } from "./format";
+import { InvitationsList } from "./invitations-list";
+import { InviteForm } from "./invite-form";
+import { teachPaths } from "./paths";
+import { RosterImport } from "./roster-import";
+import { Badge, Loaded, Panel } from "./ui";
+
+export function Component() {
+  const cohortId = Number(useParams().cohortId);
+  const cohort = useCohort(cohortId);
+  const name = cohort.data?.cohort.name;
+
+  return (
+    <>
+      <title>{`${name ?? "Cohort"} — Grain & Edge`}</title>
+      <PageHeader
+        eyebrow="Cohort"
+        title={
+          <span className="inline-flex flex-wrap items-center gap-3">
+            {name ?? "Cohort"}
+            {cohort.data?.cohort.archived ? <Badge className="align-middle text-sm">Archived</Badge> : null}
+          </span>
+        }
+        lede={
+          cohort.data
+            ? `Taught by ${cohort.data.cohort.instructor.displayName} · ${plural(cohort.data.cohort.studentCount, "student")} · ${plural(cohort.data.cohort.assignmentCount, "assignment")}`
+            : undefined
+        }
+      >
+        <ButtonLink to={teachPaths.gradebook(cohortId)}>Open the gradebook</ButtonLink>
+        <ButtonLink to={teachPaths.dashboard} variant="onDark">
+          All cohorts
+        </ButtonLink>
+      </PageHeader>
+      <PageBody>
+        <Loaded query={cohort} label="cohort">
+          {(data) => <CohortSections data={data} />}
+        </Loaded>
+      </PageBody>
+    </>
+  );
+}
+
+function CohortSections({ data }: { data: CohortDetail }) {
+  const id = data.cohort.id;
+  const archived = data.cohort.archived;
+  return (
+    <div className="space-y-8">
+      <CohortSettings data={data} />
+      {archived ? (
+        <Alert tone="info" title="This cohort is archived">
+          Its students and grades stay readable. Restore it above to invite students or change assignments.
+        </Alert>
+      ) : null}
+      <div className="grid gap-8 xl:grid-cols-[1.4fr_1fr] xl:items-start">
+        <CohortStudents data={data} />
+        <div className="space-y-8">
+          {archived ? null : (
+            <Panel id="invite" title="Invite by e-mail" description="Each person gets a link that works once and expires after a week. Existing students are added at once.">
+              <InviteForm cohortId={id} />
+            </Panel>
+          )}
+          <InvitationsList cohortId={id} archived={archived} />
+        </div>
+      </div>
+      {archived ? null : <RosterImport cohortId={id} />}
+      <AssignmentsEditor cohortId={id} archived={archived} />
+    </div>
+  );
+}
+
+function CohortSettings({ data }: { data: CohortDetail }) {
+  const update = useUpdateCohort(data.cohort.id);
+  const [editing, setEditing] = useState(false);
+  const [name, setName] = useState(data.cohort.name);
+  const [error, setError] = useState<string | undefined>();
+
+  async function rename(event: React.FormEvent) {
+    event.preventDefault();
+    const parsed = cohortNameSchema.safeParse(name);
+    if (!parsed.success) return setError(parsed.error.issues[0].message);
+    setError(undefined);
+    await update.mutateAsync({ name: parsed.data });
+    setEditing(false);
+  }
+
+  return (
+    <div className="flex flex-wrap items-end gap-3">
+      {editing ? (
+        <form onSubmit={(e) => void rename(e).catch(() => undefined)} noValidate className="flex flex-wrap items-end gap-3">
+          <TextField label="Cohort name" value={name} onChange={(e) => setName(e.target.value)} error={error} maxLength={120} autoFocus className="min-w-64" />
+          <Button type="submit" disabled={update.isPending}>
+            Save name
+          </Button>
+          <Button variant="secondary" onClick={() => setEditing(false)}>
+            Cancel
+          </Button>
+        </form>
+      ) : (
+        <>
+          <Button variant="secondary" onClick={() => setEditing(true)} disabled={data.cohort.archived}>
+            Rename
+          </Button>
+          <Button
+            variant="secondary"
+            onClick={() => {
+              if (data.cohort.archived || window.confirm(`Archive “${data.cohort.name}”? Students keep their accounts; the cohort leaves your active list.`)) {
+                update.mutate({ archived: !data.cohort.archived });
+              }
+            }}
+            disabled={update.isPending}
+          >
+            {data.cohort.archived ? "Restore cohort" : "Archive cohort"}
+          </Button>
+        </>
+      )}
+      {update.isError ? (
+        <Alert tone="danger" className="w-full">
+          {messageFor(update.error)}
+        </Alert>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,125 @@
+/**
+ * Per-question analytics for one quiz: share of students whose latest attempt got each question
+ * right (bar chart), and the most common wrong answers (table, which also carries the chart's numbers).
+ */
+import { useId, useState } from "react";
+import { Bar, BarChart, CartesianGrid, Cell, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import type { QuizAnalytics } from "@shared/api/gradebook";
+import { cx } from "@/components/ui/cx";
+import { CHART, TICK } from "./chart-style";
+import { percent } from "./format";
+import { selectClass } from "./ui";
+
+/** Below this share the question is flagged: most of the cohort got it wrong. */
+const WEAK = 0.5;
+
+/** The prompt as authors wrote it; drawn numbers ({name}) become "…". */
+const plainPrompt = (p: string) => p.replace(/\{[A-Za-z]\w*\}/g, "…").replace(/[*_`$]/g, "");
+
+export function QuestionAnalytics({ quizzes }: { quizzes: QuizAnalytics[] }) {
+  const [quizId, setQuizId] = useState(quizzes[0]?.quizId ?? "");
+  const selectId = useId();
+  const quiz = quizzes.find((q) => q.quizId === quizId) ?? quizzes[0];
+  if (!quiz) return <p className="text-sm text-soot-700">No quizzes in the assigned modules yet.</p>;
+
+  const data = quiz.questions.map((q, i) => ({ label: `Q${i + 1}`, share: q.correctShare === null ? 0 : Math.round(q.correctShare * 100), answered: q.answered, weak: q.correctShare !== null && q.correctShare < WEAK }));
+  const weakest = [...quiz.questions].filter((q) => q.correctShare !== null).sort((a, b) => (a.correctShare ?? 0) - (b.correctShare ?? 0))[0];
+
+  return (
+    <div className="space-y-4">
+      <div className="flex flex-wrap items-end gap-4">
+        <div>
+          <label htmlFor={selectId} className="block text-sm font-semibold text-soot-800">
+            Quiz
+          </label>
+          <select id={selectId} className={`${selectClass} mt-1.5 max-w-full`} value={quiz.quizId} onChange={(e) => setQuizId(e.target.value)}>
+            {quizzes.map((q) => (
+              <option key={q.quizId} value={q.quizId}>
+                {q.title}
+              </option>
+            ))}
+          </select>
+        </div>
+        <p className="pb-2 text-sm text-soot-700">
+          {quiz.studentsAttempted} {quiz.studentsAttempted === 1 ? "student has" : "students have"} attempted it; figures use each student's latest attempt.
+        </p>
+      </div>
+
+      {quiz.studentsAttempted === 0 ? (
+        <p className="text-sm text-soot-700">Nobody has attempted this quiz yet.</p>
+      ) : (
+        <figure className="rounded-md border border-bone-200 p-3">
+          <figcaption className="text-sm font-semibold text-soot-900">Share correct, question by question</figcaption>
+          <p className="text-xs text-soot-600">
+            {weakest ? `Hardest: Q${quiz.questions.indexOf(weakest) + 1}, ${percent(weakest.correctShare)} correct. ` : ""}Bars below {percent(WEAK)} are in ember. The
+            same numbers are in the table below.
+          </p>
+          <div className="mt-2" style={{ height: Math.max(140, data.length * 34 + 40) }} aria-hidden="true">
+            <ResponsiveContainer width="100%" height="100%">
+              <BarChart data={data} layout="vertical" margin={{ top: 4, right: 24, bottom: 4, left: 0 }}>
+                <CartesianGrid stroke={CHART.grid} horizontal={false} />
+                <XAxis type="number" domain={[0, 100]} ticks={[0, 25, 50, 75, 100]} tickFormatter={(v: number) => `${v} %`} tick={TICK} />
+                <YAxis type="category" dataKey="label" width={36} tick={TICK} />
+                <Tooltip formatter={(v) => [`${String(v)} %`, "correct"]} cursor={{ fill: "rgba(216,204,184,0.35)" }} />
+                <Bar dataKey="share" radius={[0, 3, 3, 0]} isAnimationActive={false}>
+                  {data.map((d) => (
+                    <Cell key={d.label} fill={d.weak ? CHART.ember : CHART.quench} />
+                  ))}
+                </Bar>
+              </BarChart>
+            </ResponsiveContainer>
+          </div>
+        </figure>
+      )}
+
+      <div className="overflow-x-auto">
+        <table className="w-full min-w-[32rem] text-left text-sm">
+          <caption className="sr-only">Each question of {quiz.title}: share correct and the most common wrong answers</caption>
+          <thead className="text-soot-700">
+            <tr className="border-b border-bone-300">
+              <th scope="col" className="py-2 pr-3 font-semibold">
+                #
+              </th>
+              <th scope="col" className="py-2 pr-3 font-semibold">
+                Question
+              </th>
+              <th scope="col" className="py-2 pr-3 text-right font-semibold">
+                Correct
+              </th>
+              <th scope="col" className="py-2 font-semibold">
+                Most common wrong answers
+              </th>
+            </tr>
+          </thead>
+          <tbody className="divide-y divide-bone-200">
+            {quiz.questions.map((q, i) => (
+              <tr key={q.questionId} className="align-top">
+                <td className="py-2 pr-3 font-mono text-xs text-soot-600">Q{i + 1}</td>
+                <td className="max-w-md py-2 pr-3 text-soot-800">{plainPrompt(q.prompt)}</td>
+                <td className={cx("py-2 pr-3 text-right font-mono tabular-nums", q.correctShare !== null && q.correctShare < WEAK ? "font-semibold text-ember-700" : "")}>
+                  {percent(q.correctShare)}
+                  <span className="block text-2xs text-soot-600">
+                    {q.correct}/{q.answered}
+                  </span>
+                </td>
+                <td className="py-2">
+                  {q.commonWrong.length === 0 ? (
+                    <span className="text-soot-500">—</span>
+                  ) : (
+                    <ul className="space-y-0.5">
+                      {q.commonWrong.map((w) => (
+                        <li key={w.answer} className="text-soot-800">
+                          <span className="font-mono text-xs text-ember-700">{w.count}×</span> {w.answer}
+                        </li>
+                      ))}
+                    </ul>
+                  )}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </div>
+  );
+}
