@@ -16,10 +16,28 @@ const MAX_DAYS = 120;
 
 const dayKey = (d: Date) => d.toISOString().slice(0, 10);
 
-/** What counts as "the same wrong answer": the option text for choices, the feedback (else the value) otherwise. */
-function wrongKey(result: QuestionResult): string {
-  if ((result.kind === "numeric" || result.kind === "sim-task") && result.feedback) return result.feedback;
-  return result.given || "—";
+const leadingNumber = (text: string): number | null => {
+  const m = /^\s*(-?\d+(?:\.\d+)?(?:e-?\d+)?)/i.exec(text.replace(/\u2212/g, "-"));
+  return m ? Number(m[1]) : null;
+};
+const unitPart = (text: string) => text.replace(/^\s*-?[\d.eE\u2212-]+\s*/, "").trim();
+
+/**
+ * What counts as "the same wrong answer". Choices: the option text given. Numbers: drawn values
+ * differ per student, so group by the kind of mistake (unit mix-up, too high, too low, far off).
+ * Simulation tasks: all misses are one group.
+ */
+export function wrongKey(result: QuestionResult): string {
+  if (result.given === "—" || result.given === "" || result.feedback === "Not answered.") return "Not answered";
+  if (result.kind === "single" || result.kind === "multiple") return result.given;
+  if (result.kind === "sim-task") return "Settings that do not meet the task";
+  if (result.feedback?.startsWith("Your number is right in")) return "Right number, wrong unit";
+  const correctText = result.correctAnswer.replace(/\s*\(accepted[^)]*\)\s*$/, "");
+  const given = leadingNumber(result.given);
+  const correct = leadingNumber(correctText);
+  if (given === null || correct === null || unitPart(result.given) !== unitPart(correctText)) return "Outside the accepted range";
+  if (correct !== 0 && (given / correct > 2 || given / correct < 0.5)) return given > correct ? "Far too high (over twice the answer)" : "Far too low (under half the answer)";
+  return given > correct ? "Too high (outside the accepted range)" : "Too low (outside the accepted range)";
 }
 
 export async function quizAnalytics(db: Db, catalog: CourseCatalog, data: CohortWork): Promise<QuizAnalytics[]> {

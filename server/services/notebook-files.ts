@@ -94,7 +94,7 @@ export function createNotebookFiles(ctx: AppContext): NotebookFiles {
         const detected = await detectUpload(received.buffer);
         await ensureDir();
 
-        let attrs: Omit<FileCreation, "entryId" | "userId">;
+        let attrs: Omit<FileCreation, "entryId" | "userId" | "id" | "createdAt" | "updatedAt">;
         if (detected.kind === "image") {
           const image = await processImage(received.buffer, detected.format, settings);
           const main = await store.write(image.main.data, image.main.ext);

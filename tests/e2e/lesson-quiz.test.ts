@@ -56,8 +56,22 @@ async function quizId(page: Page): Promise<string> {
   return lesson!.quizId!;
 }
 
+/** Make sure the student has a stored attempt (so this test does not depend on the one before it). */
+async function ensureAttempt(page: Page) {
+  const id = await quizId(page);
+  const history = (await (await page.request.get(`${server.baseUrl}/api/quizzes/${id}/attempts`)).json()) as AttemptHistory;
+  if (history.attempts.length > 0) return;
+  const { csrfToken } = (await (await page.request.get(`${server.baseUrl}/api/auth/csrf`)).json()) as { csrfToken: string };
+  const view = (await (await page.request.get(`${server.baseUrl}/api/quizzes/${id}`)).json()) as { drawId: number };
+  const res = await page.request.post(`${server.baseUrl}/api/quizzes/${id}/attempts`, {
+    headers: { "x-csrf-token": csrfToken },
+    data: { idempotencyKey: `e2e-${Date.now()}`, drawId: view.drawId, answers: {} },
+  });
+  expect(res.status()).toBe(201);
+}
+
 describe("lesson and quiz, as the demo student", () => {
-  it("reads a lesson, moves a simulation control, answers the quiz and finds the result stored after a reload", async () => {
+  it("reads a lesson, moves a simulation control, answers the quiz and finds the result stored after a reload", { timeout: 300_000 }, async () => {
     const { context, page, problems } = await signedInPage(VIEWPORTS.desktop);
     try {
       // The module list links to the lesson.
@@ -96,7 +110,7 @@ describe("lesson and quiz, as the demo student", () => {
       const sim = page.locator(".sim-frame").first();
       await sim.scrollIntoViewIfNeeded();
       const slider = sim.locator("input[type=range]").first();
-      await slider.waitFor({ timeout: 30_000 });
+      await slider.waitFor({ timeout: 90_000 });
       const before = await slider.inputValue();
       await slider.focus();
       for (let i = 0; i < 5; i += 1) await page.keyboard.press("ArrowRight");
@@ -145,10 +159,11 @@ describe("lesson and quiz, as the demo student", () => {
     }
   });
 
-  it("a lesson page and a quiz result at 1280 and 390 px, and axe finds nothing serious", async () => {
-    for (const [name, viewport] of Object.entries(VIEWPORTS)) {
+  it.each(Object.entries(VIEWPORTS))("%s: a lesson page and a quiz result screenshot, and axe finds nothing serious", async (name, viewport) => {
+    {
       const { context, page, problems } = await signedInPage(viewport);
       try {
+        await ensureAttempt(page);
         await page.goto(`${server.baseUrl}${LESSON_PATH}`);
         await page.locator("article.lesson-prose h2[data-section]").first().waitFor();
         await fontsReady(page);
@@ -160,7 +175,7 @@ describe("lesson and quiz, as the demo student", () => {
         await panel.scrollIntoViewIfNeeded();
         await panel.getByTestId("quiz-result").first().waitFor({ timeout: 20_000 });
         await readThrough(page);
-        await page.locator(".sim-frame input[type=range]").first().waitFor({ timeout: 30_000 });
+        await page.locator(".sim-frame input[type=range]").first().waitFor({ timeout: 90_000 });
         // The score and the first questions' feedback (the whole panel is several screens tall):
         // a tall viewport with the panel scrolled to its top.
         await page.setViewportSize({ width: viewport.width, height: 1600 });
@@ -176,9 +191,9 @@ describe("lesson and quiz, as the demo student", () => {
         await context.close();
       }
     }
-  });
+  }, 300_000);
 
-  it("prints as a clean handout: no site chrome, no simulation canvas, the title kept", async () => {
+  it("prints as a clean handout: no site chrome, no simulation canvas, the title kept", { timeout: 180_000 }, async () => {
     const { context, page } = await signedInPage(VIEWPORTS.desktop);
     try {
       await page.goto(`${server.baseUrl}${LESSON_PATH}`);

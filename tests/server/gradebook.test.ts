@@ -6,6 +6,7 @@
 import Papa from "papaparse";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { CohortAnalytics, Gradebook, StudentAttempts } from "../../shared/api/gradebook";
+import { wrongKey } from "../../server/services/gradebook-analytics";
 import { createTeachingWorld, FAILING_ANSWERS, PASSING_ANSWERS, submitQuiz, type TeachingWorld } from "./teaching-fixture";
 
 let w: TeachingWorld;
@@ -121,5 +122,21 @@ describe("GET /api/cohorts/:id/gradebook.csv", () => {
     expect(after.length).toBe(before + 1);
     expect(after.at(-1)!).toMatchObject({ actorId: w.own.user.id, targetType: "cohort", targetId: String(w.cohortA) });
     expect(res.headers["x-content-type-options"]).toBe("nosniff");
+  });
+});
+
+describe("grouping wrong answers (wrongKey)", () => {
+  const numeric = (given: string, correctAnswer: string, feedback?: string) =>
+    wrongKey({ questionId: "q", kind: "numeric", correct: false, points: 1, pointsAwarded: 0, given, correctAnswer, explanation: "", feedback });
+  it("groups numeric mistakes by kind, since drawn numbers differ per student", () => {
+    expect(numeric("900 °C", "727 °C (accepted ±2 °C)")).toBe("Too high (outside the accepted range)");
+    expect(numeric("700 °C", "727 °C (accepted ±2 °C)")).toBe("Too low (outside the accepted range)");
+    expect(numeric("2000 °C", "727 °C (accepted ±2 °C)")).toBe("Far too high (over twice the answer)");
+    expect(numeric("1000 K", "727 °C (accepted ±2 °C)")).toBe("Outside the accepted range");
+    expect(numeric("1000 K", "727 °C (accepted ±2 °C)", "Your number is right in °C, but you chose K: check the unit.")).toBe("Right number, wrong unit");
+    expect(numeric("—", "727 °C (accepted ±2 °C)", "Not answered.")).toBe("Not answered");
+  });
+  it("keeps the option text for choice questions", () => {
+    expect(wrongKey({ questionId: "q", kind: "single", correct: false, points: 1, pointsAwarded: 0, given: "Ferrite", correctAnswer: "Austenite", explanation: "" })).toBe("Ferrite");
   });
 });

@@ -4,19 +4,17 @@ import { requireInRange } from "../validate";
 import { allocateCarbides, type AllocationOptions } from "./carbide-allocation";
 import type { CarbideType } from "./carbide-data";
 
-/** Eutectoid and maximum austenite carbon of the ASM Fe–C diagram used for the Acm line (science-reference §5.2). */
+import { austeniteCarbonOnAcmMassPct } from "../heat-treatment/critical-temperatures";
+
+/** Eutectoid temperature and carbon of the ASM Fe–C diagram (science-reference §5.2). */
 const EUTECTOID_TEMP_C = 727;
 const EUTECTOID_C = 0.77;
-const MAX_AUSTENITE_C = 2.11;
-const ACM_SLOPE_C_PER_PCT = 314.18;
+/** The Acm line ends at the eutectic (1148 °C); above it austenite holds its maximum carbon. */
+const ACM_TOP_C = 1148;
 
-/**
- * Carbon in austenite on the Acm line at temperature T (727–1148 °C): C_γ = 0.77 + (T − 727)/314.18, the
- * straight line between the ASM eutectoid (0.77 %, 727 °C) and (2.11 %, 1148 °C) [Computed]
- * science-reference §5.2. Kept private here; the Fe–C helpers of heat-treatment/ may supersede it.
- */
+/** Carbon in austenite on the Acm line, clamped to the line's temperature span. */
 function acmAusteniteCarbonMassPct(tempC: number): number {
-  return Math.min(MAX_AUSTENITE_C, EUTECTOID_C + (Math.min(tempC, 1148) - EUTECTOID_TEMP_C) / ACM_SLOPE_C_PER_PCT);
+  return austeniteCarbonOnAcmMassPct(Math.min(Math.max(tempC, EUTECTOID_TEMP_C), ACM_TOP_C));
 }
 
 /** A linear dissolution window: nothing below startC, maxFraction from endC upward. [App] */

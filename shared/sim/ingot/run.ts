@@ -256,9 +256,13 @@ function createRecorder(cells: number, tracked: IngotElement[]): Recorder {
   const means = Object.fromEntries(tracked.map((el) => [el, new Float32Array(cap * cells)])) as Record<IngotElement, Float32Array>;
   const pools = Object.fromEntries(tracked.map((el) => [el, new Float32Array(cap)])) as Record<IngotElement, Float32Array>;
 
+  // Keep the frames on even points of the time grid (not even indices: a grid point can be
+  // missed or doubled by rounding), then double the grid.
   const compact = () => {
     let w = 0;
-    for (let r = 0; r < count; r += 2) {
+    for (let r = 0; r < count; r++) {
+      if (r > 0 && Math.round(times[r] / interval) % 2 !== 0) continue;
+      if (w > 0 && Math.round(times[r] / (2 * interval)) === Math.round(times[w - 1] / (2 * interval))) continue;
       if (r !== w) {
         times[w] = times[r];
         temps.copyWithin(w * cells, r * cells, (r + 1) * cells);
@@ -278,10 +282,8 @@ function createRecorder(cells: number, tracked: IngotElement[]): Recorder {
     nextTimeS: 0,
     record(state, force = false) {
       if (count > 0 && times[count - 1] === state.timeS) return;
-      if (count === cap) {
-        if (force) count -= 1; // the final frame always goes in
-        else compact();
-      }
+      if (count === cap) compact();
+      if (count === cap) count -= 1; // compaction could not free a row: overwrite the last
       const row = count * cells;
       times[count] = state.timeS;
       for (let i = 0; i < cells; i++) {
@@ -295,7 +297,10 @@ function createRecorder(cells: number, tracked: IngotElement[]): Recorder {
       }
       count++;
       if (interval === 0 && state.timeS > 0) interval = state.timeS; // first step sets the pace
-      recorder.nextTimeS = state.timeS + Math.max(interval, 1e-9);
+      // Next frame on a fixed grid of the interval, so frames stay evenly spaced after halving.
+      const grid = Math.max(interval, 1e-9);
+      // (A step that lands a rounding error short of a grid point still counts as on it.)
+      recorder.nextTimeS = grid * (Math.floor(state.timeS / grid + 1e-6) + 1 - 1e-6);
     },
     frames() {
       return {

@@ -21,7 +21,7 @@ export function describeIngotFrame(run: IngotRun, frame: IngotFrameView, fronts:
   if (frame.poolMassPct !== null) {
     const nominal = run.nominalMassPct[element] ?? 0;
     const ratio = nominal > 0 ? frame.poolMassPct / nominal : 1;
-    if (fronts.liquidusFrontM < run.radiusM) {
+    if (fronts.sectionSolidFraction < 0.999) {
       parts.push(`The remaining liquid holds ${formatMassPct(frame.poolMassPct)} ${element}, ${ratio.toFixed(2)} times the melt's ${formatMassPct(nominal)}.`);
     }
   } else {

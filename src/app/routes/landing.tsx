@@ -28,7 +28,7 @@ const TOPICS = [
   {
     label: "Cr₂O₃",
     title: "Why stainless stays bright",
-    text: "The chromium-oxide film a few nanometres thick, the 10.5 % chromium of the standard definition against the 12–13 % smiths count on, and how carbon steals chromium into carbides.",
+    text: "The chromium-oxide film a few nanometres thick, the 10.5 % chromium of the standard definition against the 12–13 % smiths count on, and how carbon steals chromium into carbides.",
   },
   {
     label: "M₇C₃",
@@ -46,6 +46,14 @@ const TOPICS = [
     text: "How an ingot freezes and segregates, why high-vanadium steels are made from gas-atomised powder, and what hot isostatic pressing does to that powder.",
   },
 ] as const;
+
+/** Let the last card fill an otherwise half-empty final row (2 columns from sm, 3 from lg). */
+function lastCardSpan(index: number, count: number): string | undefined {
+  if (index !== count - 1) return undefined;
+  const sm = count % 2 === 1 ? "sm:col-span-2" : "";
+  const lg = count % 3 === 2 ? "lg:col-span-2" : count % 3 === 1 ? "lg:col-span-3" : "lg:col-span-1";
+  return `${sm} ${lg}`.trim();
+}
 
 export function Component() {
   const me = useMe();
@@ -120,7 +128,7 @@ export function Component() {
               <li key={topic.title} className="grid grid-cols-[auto_1fr] gap-4">
                 <span
                   aria-hidden="true"
-                  className="mt-0.5 flex h-9 w-20 items-center justify-center rounded-sm bg-soot-900 font-mono text-xs font-semibold whitespace-nowrap text-ember-300 shadow-[inset_0_-3px_0_var(--color-ember-600)]"
+                  className="mt-0.5 flex h-9 w-20 items-center justify-center rounded-sm bg-soot-900 font-mono text-sm font-semibold whitespace-nowrap text-ember-300 shadow-[inset_0_-3px_0_var(--color-ember-600)]"
                 >
                   {topic.label}
                 </span>
@@ -150,8 +158,8 @@ export function Component() {
           </Link>
         </div>
         <ul className="mt-8 grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
-          {SIMULATION_IDS.map((id) => (
-            <li key={id}>
+          {SIMULATION_IDS.map((id, index) => (
+            <li key={id} className={lastCardSpan(index, SIMULATION_IDS.length)}>
               <Link
                 to={paths.labSimulation(id)}
                 className="group block h-full rounded-lg border border-bone-300 bg-white p-5 shadow-card transition-colors hover:border-ember-500"

@@ -14,8 +14,8 @@ export function CarbideStats({ sim, edge, restore }: CarbideStatsProps) {
   const items: [string, string][] = [
     ["Carbides", `${pop.totalCarbideVolumePct.toFixed(1)} vol %`],
     ["Matrix", pop.matrixHrc !== null ? `${pop.matrixHrc.toFixed(0)} HRC` : `${pop.matrixHv.toFixed(0)} HV`],
-    ["Edge retention", `${sim.indices.edgeRetention.toFixed(2)} (model index)`],
-    ["Sharpening effort", `${sim.indices.sharpeningEffort.toFixed(2)} (model index)`],
+    ["Edge retention (model index)", sim.indices.edgeRetention.toFixed(2)],
+    ["Sharpening effort (model index)", sim.indices.sharpeningEffort.toFixed(2)],
   ];
   const view = sim.params.view;
   if (view === "field") items.push(["Particles drawn", String(sim.visible.count)], ["Time at temperature", `${sim.hours.toFixed(1)} h`]);

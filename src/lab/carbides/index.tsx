@@ -44,7 +44,7 @@ export interface CarbideSimulationProps {
 }
 
 function resolveInitial(initial: Record<string, unknown> | undefined): { params: CarbideParams; error: string | null } {
-  const raw = initial ?? readSearchParams(currentSearch(), CARBIDE_PARAM_KEYS);
+  const raw = initial ?? readSearchParams(currentSearch(), CARBIDE_PARAM_KEYS, ["grade"]);
   const parsed = carbideParamsSchema.safeParse(raw);
   return parsed.success ? { params: parseCarbideParams(parsed.data), error: null } : { params: parseCarbideParams({}), error: z.prettifyError(parsed.error) };
 }

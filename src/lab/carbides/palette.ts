@@ -15,11 +15,11 @@ export interface CarbideStyle {
  * from the dark matrix and from the pale air of the edge view; the pattern tells types apart without colour.
  */
 export const CARBIDE_STYLE: Record<CarbideType, CarbideStyle> = {
-  MC: { fill: "#9e9a94", mark: "#f4f1ea", pattern: "none", name: "Vanadium carbide" },
+  MC: { fill: "#858179", mark: "#f4f1ea", pattern: "none", name: "Vanadium carbide" },
   M7C3: { fill: "#c8742c", mark: "#ffe0bd", pattern: "hatch", name: "Chromium carbide M₇C₃" },
   M6C: { fill: "#9a6cc0", mark: "#eadcf7", pattern: "dots", name: "Tungsten–molybdenum carbide" },
   M23C6: { fill: "#3f8fc0", mark: "#d6ecfa", pattern: "cross", name: "Chromium carbide M₂₃C₆" },
-  M3C: { fill: "#b59a3c", mark: "#f6ecc4", pattern: "stipple", name: "Iron carbide (cementite)" },
+  M3C: { fill: "#9a812c", mark: "#f6ecc4", pattern: "stipple", name: "Iron carbide (cementite)" },
 };
 
 export const MATRIX_COLOUR = { hardened: "#2b2723", hardenedNeedle: "#3a342e", annealed: "#3a352f", annealedGrain: "#4d463e" } as const;

@@ -5,12 +5,12 @@
  */
 export const SURFACE_COLOURS = {
   bareIron: "#1f2226",
-  bareChromium: "#3a4048",
+  bareChromium: "#26292e",
   filmIron: "#e8f0f6",
   filmChromium: "#d5e3ee",
   rust: "#c2521c",
   rustDark: "#93380c",
-  carbide: "#5b3f78",
+  carbide: "#8560b0",
   carbideOutline: "#eadcf7",
   halo: "#d9c2ef",
   haloDark: "#5b2f7a",

@@ -41,8 +41,9 @@ describe("reading frames", () => {
   it("places the fronts where the solid fraction crosses 1 and 0", () => {
     const positions = [0, 1, 2, 3, 4];
     const fronts = findFronts([1, 1, 0.5, 0, 0], positions, 4);
-    expect(fronts.solidusFrontM).toBeCloseTo(1.5, 6); // between node 1 (1) and node 2 (0.5)
-    expect(fronts.liquidusFrontM).toBeCloseTo(3, 6);
+    expect(fronts.solidusFrontM).toBeCloseTo(1, 5); // node 1 is the last fully solid one
+    expect(findFronts([1, 1, 1, 0.5, 0], positions, 4).solidusFrontM).toBeCloseTo(2, 5);
+    expect(fronts.liquidusFrontM).toBeCloseTo(3, 5);
     expect(findFronts([0, 0, 0, 0, 0], positions, 4).sectionSolidFraction).toBe(0);
     expect(findFronts([1, 1, 1, 1, 1], positions, 4).sectionSolidFraction).toBeCloseTo(1, 12);
   });

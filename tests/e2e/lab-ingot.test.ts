@@ -1,0 +1,81 @@
+/**
+ * The ingot simulation in the built app: it computes in its worker, shows the section, reacts to a
+ * slider with a new live summary, reads URL parameters, passes axe at desktop and phone width and
+ * keeps to the Content-Security-Policy. Screenshots go to tests/artifacts/.
+ */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser, Page } from "playwright-core";
+import { fontsReady, launchBrowser, openPage, screenshot, seriousAxeViolations, startTestServer, VIEWPORTS, type TestServer } from "../support/browser";
+
+let server: TestServer;
+let browser: Browser;
+
+beforeAll(async () => {
+  server = await startTestServer();
+  browser = await launchBrowser();
+});
+
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+});
+
+const summary = (page: Page) => page.getByTestId("live-summary");
+
+async function summaryText(page: Page): Promise<string> {
+  return (await summary(page).textContent()) ?? "";
+}
+
+/** Wait until the live summary matches (the solver runs in a worker; the region is throttled). */
+async function waitForSummary(page: Page, pattern: RegExp, timeout = 60_000): Promise<string> {
+  await page.waitForFunction((source) => new RegExp(source).test(document.querySelector("[data-testid=live-summary]")?.textContent ?? ""), pattern.source, { timeout });
+  return summaryText(page);
+}
+
+describe("ingot simulation", () => {
+  it("freezes the chosen ingot and updates the summary when the diameter slider moves", async () => {
+    const { context, page, problems } = await openPage(browser);
+    await page.goto(`${server.baseUrl}/lab/ingot?grade=D2&sizeMm=300&element=V`);
+    // Reduced motion (set by openPage): the frozen ingot is shown at once, paused.
+    const before = await waitForSummary(page, /300 mm ingot was fully solid/);
+    expect(before).toMatch(/V runs from/);
+    await page.locator("canvas").first().waitFor();
+
+    await page.getByRole("slider", { name: "Ingot diameter" }).fill("800");
+    const after = await waitForSummary(page, /800 mm ingot was fully solid/);
+    expect(after).not.toBe(before);
+
+    // Switching the mapped element changes the words without a new run.
+    await page.getByRole("radio", { name: "Cr" }).check({ force: true });
+    await waitForSummary(page, /Cr runs from/);
+
+    expect(problems.csp, problems.csp.join("\n")).toEqual([]);
+    expect(problems.pageErrors).toEqual([]);
+    await context.close();
+  });
+
+  it("marks coarse primary carbides in a high-vanadium ingot and explains the powder route", async () => {
+    const { context, page } = await openPage(browser);
+    await page.goto(`${server.baseUrl}/lab/ingot?grade=A11&sizeMm=400&mould=metal`);
+    const text = await waitForSummary(page, /fully solid/);
+    expect(text).toMatch(/Coarse primary carbides are likely/);
+    const panel = page.getByRole("region", { name: "Coarse primary carbides" });
+    await expect(panel.textContent()).resolves.toMatch(/powder route/);
+    await expect(panel.textContent()).resolves.toMatch(/Common practice, no published source/i);
+    await context.close();
+  });
+
+  for (const viewport of [VIEWPORTS.desktop, VIEWPORTS.phone]) {
+    it(`has no serious accessibility violations at ${viewport.width} px`, async () => {
+      const { context, page, problems } = await openPage(browser, viewport);
+      await page.goto(`${server.baseUrl}/lab/ingot`);
+      await waitForSummary(page, /fully solid/);
+      await page.getByRole("heading", { name: "Freezing time against casting modulus" }).waitFor().catch(() => undefined);
+      await fontsReady(page);
+      expect(await seriousAxeViolations(page)).toEqual([]);
+      await screenshot(page, `lab-ingot-${viewport.width}`);
+      expect(problems.csp, problems.csp.join("\n")).toEqual([]);
+      await context.close();
+    });
+  }
+});
