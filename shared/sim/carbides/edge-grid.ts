@@ -1,4 +1,4 @@
-import { ABRASIVES, CARBIDE_DATA, wearIndex, type CarbideType } from "../../metallurgy";
+import { CARBIDE_DATA, wearIndex, type CarbideType } from "../../metallurgy";
 import type { BaseField, VisibleField } from "./field";
 
 /**

@@ -110,7 +110,7 @@ export function SiteHeader() {
         id={menuId}
         ref={menuPanel}
         hidden={!menuOpen}
-        className="border-t border-soot-700 bg-soot-900 px-gutter pb-5 pt-3 md:hidden"
+        className="border-b-4 border-ember-500 bg-soot-950 px-gutter pb-5 pt-3 shadow-forge md:hidden"
       >
         <nav aria-label="Main, phone">
           <ul className="flex flex-col">

@@ -11,7 +11,7 @@ export function Component() {
     <>
       <title>Account — Grain &amp; Edge</title>
       <PageHeader eyebrow="Account" title="Your account" lede="Your sign-in details and password." />
-      <PageBody className="grid gap-6 md:grid-cols-[1fr_1.4fr] md:items-start">
+      <PageBody className="grid grid-cols-1 gap-6 md:grid-cols-[1fr_1.4fr] md:items-start">
         <Card>
           <CardHeading title="Signed in as" />
           {user ? (

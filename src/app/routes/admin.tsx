@@ -17,7 +17,7 @@ export function Component() {
         title="The school at a glance"
         lede="Accounts by role, cohorts and the state of the server."
       />
-      <PageBody className="grid gap-8 lg:grid-cols-[1fr_20rem] lg:items-start">
+      <PageBody className="grid grid-cols-1 gap-8 lg:grid-cols-[1fr_20rem] lg:items-start">
         <div className="space-y-10">
           <QueryState query={summary}>
             {(data) =>

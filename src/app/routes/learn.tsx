@@ -21,7 +21,7 @@ export function Component() {
         title={user ? `Welcome back, ${firstName(user.displayName)}` : "My learning"}
         lede="Your cohorts, what is due next and how far you have come."
       />
-      <PageBody className="grid gap-8 lg:grid-cols-[1fr_20rem] lg:items-start">
+      <PageBody className="grid grid-cols-1 gap-8 lg:grid-cols-[1fr_20rem] lg:items-start">
         <div className="space-y-10">
           <DueAssignments />
           <QueryState query={summary}>

@@ -217,7 +217,9 @@ function UserRow({ user, onNotice }: { user: AdminUser; onNotice: (text: string)
             </Button>
             {user.disabled ? null : (
               <Button variant="ghost" className="min-h-9 px-3" disabled={endSessions.isPending} onClick={() => void signOutEverywhere().catch(() => undefined)}>
-                Sign out<span className="sr-only"> {user.displayName}</span> everywhere
+                <span>
+                  Sign out everywhere<span className="sr-only">: {user.displayName}</span>
+                </span>
               </Button>
             )}
           </div>

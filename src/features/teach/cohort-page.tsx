@@ -23,7 +23,17 @@ import { Badge, Loaded, Panel } from "./ui";
 export function Component() {
   const cohortId = Number(useParams().cohortId);
   const cohort = useCohort(cohortId);
+  const update = useUpdateCohort(cohortId);
+  const [renaming, setRenaming] = useState(false);
   const name = cohort.data?.cohort.name;
+  const archived = cohort.data?.cohort.archived ?? false;
+
+  function toggleArchived() {
+    if (!cohort.data) return;
+    if (archived || window.confirm(`Archive “${cohort.data.cohort.name}”? Students keep their accounts and grades; the cohort leaves your active list.`)) {
+      update.mutate({ archived: !archived });
+    }
+  }
 
   return (
     <>
@@ -43,13 +53,26 @@ export function Component() {
         }
       >
         <ButtonLink to={teachPaths.gradebook(cohortId)}>Open the gradebook</ButtonLink>
-        <ButtonLink to={teachPaths.dashboard} variant="onDark">
-          All cohorts
-        </ButtonLink>
+        {cohort.data ? (
+          <>
+            <Button variant="onDark" onClick={() => setRenaming(true)} disabled={archived || renaming} aria-expanded={renaming}>
+              Rename
+            </Button>
+            <Button variant="onDark" onClick={toggleArchived} disabled={update.isPending}>
+              {archived ? "Restore cohort" : "Archive cohort"}
+            </Button>
+          </>
+        ) : null}
       </PageHeader>
       <PageBody>
         <Loaded query={cohort} label="cohort">
-          {(data) => <CohortSections data={data} />}
+          {(data) => (
+            <div className="space-y-8">
+              {update.isError ? <Alert tone="danger">{messageFor(update.error)}</Alert> : null}
+              {renaming ? <RenameForm data={data} onDone={() => setRenaming(false)} /> : null}
+              <CohortSections data={data} />
+            </div>
+          )}
         </Loaded>
       </PageBody>
     </>
@@ -61,15 +84,14 @@ function CohortSections({ data }: { data: CohortDetail }) {
   const archived = data.cohort.archived;
   return (
     <div className="space-y-8">
-      <CohortSettings data={data} />
       {archived ? (
         <Alert tone="info" title="This cohort is archived">
-          Its students and grades stay readable. Restore it above to invite students or change assignments.
+          Its students and grades stay readable. Restore it (button at the top) to invite students or change assignments.
         </Alert>
       ) : null}
       <div className="grid gap-8 xl:grid-cols-[1.4fr_1fr] xl:items-start">
         <CohortStudents data={data} />
-        <div className="space-y-8">
+        <div className="min-w-0 space-y-8">
           {archived ? null : (
             <Panel id="invite" title="Invite by e-mail" description="Each person gets a link that works once and expires after a week. Existing students are added at once.">
               <InviteForm cohortId={id} />
@@ -84,9 +106,8 @@ function CohortSections({ data }: { data: CohortDetail }) {
   );
 }
 
-function CohortSettings({ data }: { data: CohortDetail }) {
+function RenameForm({ data, onDone }: { data: CohortDetail; onDone: () => void }) {
   const update = useUpdateCohort(data.cohort.id);
-  const [editing, setEditing] = useState(false);
   const [name, setName] = useState(data.cohort.name);
   const [error, setError] = useState<string | undefined>();
 
@@ -96,44 +117,25 @@ function CohortSettings({ data }: { data: CohortDetail }) {
     if (!parsed.success) return setError(parsed.error.issues[0].message);
     setError(undefined);
     await update.mutateAsync({ name: parsed.data });
-    setEditing(false);
+    onDone();
   }
 
   return (
-    <div className="flex flex-wrap items-end gap-3">
-      {editing ? (
-        <form onSubmit={(e) => void rename(e).catch(() => undefined)} noValidate className="flex flex-wrap items-end gap-3">
-          <TextField label="Cohort name" value={name} onChange={(e) => setName(e.target.value)} error={error} maxLength={120} autoFocus className="min-w-64" />
-          <Button type="submit" disabled={update.isPending}>
-            Save name
-          </Button>
-          <Button variant="secondary" onClick={() => setEditing(false)}>
-            Cancel
-          </Button>
-        </form>
-      ) : (
-        <>
-          <Button variant="secondary" onClick={() => setEditing(true)} disabled={data.cohort.archived}>
-            Rename
-          </Button>
-          <Button
-            variant="secondary"
-            onClick={() => {
-              if (data.cohort.archived || window.confirm(`Archive “${data.cohort.name}”? Students keep their accounts; the cohort leaves your active list.`)) {
-                update.mutate({ archived: !data.cohort.archived });
-              }
-            }}
-            disabled={update.isPending}
-          >
-            {data.cohort.archived ? "Restore cohort" : "Archive cohort"}
-          </Button>
-        </>
-      )}
+    <Panel id="rename" title="Rename the cohort">
+      <form onSubmit={(e) => void rename(e).catch(() => undefined)} noValidate className="flex flex-wrap items-end gap-3">
+        <TextField label="Cohort name" value={name} onChange={(e) => setName(e.target.value)} error={error} maxLength={120} autoFocus className="min-w-64 flex-1" />
+        <Button type="submit" disabled={update.isPending}>
+          Save name
+        </Button>
+        <Button variant="secondary" onClick={onDone}>
+          Cancel
+        </Button>
+      </form>
       {update.isError ? (
-        <Alert tone="danger" className="w-full">
+        <Alert tone="danger" className="mt-3">
           {messageFor(update.error)}
         </Alert>
       ) : null}
-    </div>
+    </Panel>
   );
 }

@@ -78,35 +78,12 @@ function Overview({ data }: { data: TeachingOverview }) {
       <CohortTable cohorts={data.cohorts} />
 
       <div className="grid gap-8 xl:grid-cols-2">
-        <Panel id="teach-behind" title="Who is behind" description="Students with overdue work they have not finished, most overdue first.">
+        <Panel id="teach-behind" title="Who is behind" description="Students with overdue, unfinished work, and how much of it they have done.">
           {data.behind.length === 0 ? (
             <p className="text-sm text-soot-700">Nobody has overdue work. Good forging.</p>
           ) : (
-            <ul className="divide-y divide-bone-200">
-              {data.behind.slice(0, 12).map((b) => (
-                <li key={`${b.cohort.id}-${b.student.id}`} className="py-3 first:pt-0 last:pb-0">
-                  <div className="flex flex-wrap items-baseline justify-between gap-x-3">
-                    <Link to={teachPaths.student(b.cohort.id, b.student.id)} className="font-semibold text-quench-700 underline-offset-2 hover:underline">
-                      {b.student.displayName}
-                    </Link>
-                    <span className="text-xs text-soot-600">{b.cohort.name}</span>
-                  </div>
-                  <ul className="mt-1 space-y-1 text-sm">
-                    {b.overdue.map((o) => (
-                      <li key={o.assignmentId} className="flex flex-wrap items-center gap-x-2 text-soot-700">
-                        <Badge tone="danger">Overdue</Badge>
-                        <span>{o.moduleTitle}</span>
-                        <span className="text-soot-600">
-                          — {percent(o.completion)} done, due {relativeDue(o.dueAt)}
-                        </span>
-                      </li>
-                    ))}
-                  </ul>
-                </li>
-              ))}
-            </ul>
+            <BehindList behind={data.behind} />
           )}
-          {data.behind.length > 12 ? <p className="mt-3 text-sm text-soot-600">And {data.behind.length - 12} more — see each cohort's gradebook.</p> : null}
         </Panel>
 
         <Panel id="teach-due" title="Due in the next 7 days" description="How many students have finished each piece of work.">
@@ -121,7 +98,7 @@ function Overview({ data }: { data: TeachingOverview }) {
                     <span className="font-mono text-xs text-soot-700">{formatDay(d.dueAt)}</span>
                   </div>
                   <p className="text-xs text-soot-600">
-                    <Link to={teachPaths.cohort(d.cohort.id)} className="text-quench-700 hover:underline">
+                    <Link to={teachPaths.cohort(d.cohort.id)} className="text-quench-700 underline decoration-quench-300 underline-offset-2 hover:decoration-quench-700">
                       {d.cohort.name}
                     </Link>{" "}
                     · due {relativeDue(d.dueAt)} · {d.finishedCount} of {d.studentCount} finished
@@ -135,6 +112,47 @@ function Overview({ data }: { data: TeachingOverview }) {
           )}
         </Panel>
       </div>
+    </>
+  );
+}
+
+const BEHIND_SHOWN = 8;
+
+function BehindList({ behind }: { behind: TeachingOverview["behind"] }) {
+  const [all, setAll] = useState(false);
+  const shown = all ? behind : behind.slice(0, BEHIND_SHOWN);
+  return (
+    <>
+      <ul className="divide-y divide-bone-200">
+        {shown.map((b) => (
+          <li key={`${b.cohort.id}-${b.student.id}`} className="flex flex-wrap items-start justify-between gap-x-3 gap-y-1 py-2.5 first:pt-0 last:pb-0">
+            <div className="min-w-0">
+              <Link to={teachPaths.student(b.cohort.id, b.student.id)} className="font-semibold text-quench-700 underline-offset-2 hover:underline">
+                {b.student.displayName}
+              </Link>
+              <span className="block text-xs text-soot-600">{b.cohort.name}</span>
+            </div>
+            <ul className="flex flex-wrap justify-end gap-1.5">
+              {b.overdue.map((o) => (
+                <li key={o.assignmentId}>
+                  <Badge tone="danger" className="whitespace-normal text-left font-medium">
+                    {o.moduleTitle} · {percent(o.completion)}
+                    <span className="sr-only">
+                      {" "}
+                      done, due {relativeDue(o.dueAt)}
+                    </span>
+                  </Badge>
+                </li>
+              ))}
+            </ul>
+          </li>
+        ))}
+      </ul>
+      {behind.length > BEHIND_SHOWN ? (
+        <Button variant="ghost" className="mt-2 px-0" onClick={() => setAll((v) => !v)} aria-expanded={all}>
+          {all ? "Show fewer" : `Show all ${behind.length}`}
+        </Button>
+      ) : null}
     </>
   );
 }

@@ -13,7 +13,8 @@ export function ClassTable({ result }: { result: PowderClasses }) {
         λ2 from the cooling rate (a casting-data fit extrapolated far beyond its range, so read it as an order of magnitude); carbide size
         taken as 0.3 × λ2 (a model rule).
       </p>
-      <div className="mt-2 overflow-x-auto">
+      {/* Focusable so the table can be scrolled sideways with the keyboard on a phone. */}
+      <div className="mt-2 overflow-x-auto" tabIndex={0} role="region" aria-label="Size-class table (scrolls sideways)">
         <table className="w-full min-w-[36rem] border-collapse text-right text-sm tabular-nums">
           <thead>
             <tr className="border-b border-bone-300 text-xs text-soot-700">

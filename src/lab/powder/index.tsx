@@ -201,7 +201,8 @@ export default function PowderSimulation({ initial, onParamsChange }: PowderSimu
 
 function HipFacts({ outcome }: { outcome: ReturnType<typeof hipOutcome> }) {
   return (
-    <dl className="grid grid-cols-2 gap-3 rounded-md border border-bone-300 bg-white p-3 text-sm">
+    <div className="rounded-md border border-bone-300 bg-white p-3 text-sm">
+    <dl className="grid grid-cols-2 gap-3">
       <div>
         <dt className="text-xs text-soot-600">Density after yielding</dt>
         <dd className="font-mono text-base font-semibold">{formatNumber(outcome.relativeDensity * 100, 3)} %</dd>
@@ -218,7 +219,8 @@ function HipFacts({ outcome }: { outcome: ReturnType<typeof hipOutcome> }) {
         <dt className="text-xs text-soot-600">Stage</dt>
         <dd className="text-sm font-semibold">{outcome.stage === 1 ? "1 — necks between particles" : "2 — isolated pores"}</dd>
       </div>
-      <p className="col-span-2 text-xs text-soot-600">The last porosity closes by creep and diffusion during the hold, which this model does not follow.</p>
     </dl>
+    <p className="mt-2 text-xs text-soot-600">The last porosity closes by creep and diffusion during the hold, which this model does not follow.</p>
+    </div>
   );
 }
