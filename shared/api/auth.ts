@@ -1,9 +1,10 @@
 import { z } from "zod";
 import { isCommonPassword } from "./common-passwords";
 
-export const ROLES = ["student", "instructor", "admin"] as const;
+import { ROLES, type Role } from "./roles";
+
+export { ROLES, ROLE_HOME, type Role } from "./roles";
 export const roleSchema = z.enum(ROLES);
-export type Role = z.infer<typeof roleSchema>;
 
 /**
  * New passwords: 8 to 128 characters, checked exactly as typed (no trimming, no truncation,
@@ -44,10 +45,3 @@ export interface SessionResponse {
 export interface CsrfResponse {
   csrfToken: string;
 }
-
-/** Where each role lands after signing in. */
-export const ROLE_HOME: Record<Role, string> = {
-  student: "/learn",
-  instructor: "/teach",
-  admin: "/admin",
-};

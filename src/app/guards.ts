@@ -4,7 +4,8 @@
  */
 import type { QueryClient } from "@tanstack/react-query";
 import { data, redirect, type LoaderFunctionArgs } from "react-router";
-import { ROLE_HOME, type PublicUser, type Role } from "@shared/api/auth";
+import { ROLE_HOME, type Role } from "@shared/api/roles";
+import type { PublicUser } from "@shared/api/auth";
 import { meQueryOptions } from "@/api/auth";
 import { isSafeNext, signInPath } from "@/config/paths";
 

@@ -4,7 +4,7 @@
  */
 import type { QueryClient } from "@tanstack/react-query";
 import { createBrowserRouter, type LoaderFunctionArgs } from "react-router";
-import type { Role } from "@shared/api/auth";
+import type { Role } from "@shared/api/roles";
 import { meQueryOptions } from "@/api/auth";
 import { paths, routePatterns } from "@/config/paths";
 import { redirectIfSignedIn, requireUser } from "./guards";

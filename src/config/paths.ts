@@ -8,11 +8,18 @@ export const paths = {
   account: "/account",
   lab: "/lab",
   labSimulation: (simId: string) => `/lab/${encodeURIComponent(simId)}`,
+  notebook: "/notebook",
+  notebookNew: "/notebook/new",
+  notebookEntry: (id: number) => `/notebook/${id}`,
+  notebookEdit: (id: number) => `/notebook/${id}/edit`,
+  notebookReview: "/teach/notebook",
 } as const;
 
 /** Route patterns for the router (the parameterised ones differ from the link builders). */
 export const routePatterns = {
   labSimulation: "/lab/:simId",
+  notebookEntry: "/notebook/:entryId",
+  notebookEdit: "/notebook/:entryId/edit",
 } as const;
 
 /** A sign-in link that brings the user back to `next` afterwards. */

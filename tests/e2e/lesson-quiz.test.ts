@@ -179,7 +179,8 @@ describe("lesson and quiz, as the demo student", () => {
         // The score and the first questions' feedback (the whole panel is several screens tall):
         // a tall viewport with the panel scrolled to its top.
         await page.setViewportSize({ width: viewport.width, height: 1600 });
-        await panel.evaluate((el) => el.scrollIntoView({ block: "start" }));
+        // Clear of the sticky site header.
+        await panel.evaluate((el) => window.scrollTo(0, el.getBoundingClientRect().top + window.scrollY - 84));
         await page.waitForTimeout(300);
         await page.screenshot({ path: `tests/artifacts/quiz-result-${viewport.width}.png` });
         await page.setViewportSize(viewport);

@@ -225,9 +225,12 @@ describe("bad uploads are refused and leave nothing behind", () => {
     expect(res.status).toBe(201);
     const file = (res.body as NotebookFileResponse).file;
     expect(file.name).toBe("passwd.webp");
-    const nul = await upload(w.s1, entryId, await photo(), "a\u0000b\u202e.png", "image/png");
-    expect(nul.status, JSON.stringify(nul.body)).toBe(201);
-    expect(nul.body.file.name).toBe("ab.webp");
+    // A NUL in a part header is malformed multipart (busboy refuses it): rejected, nothing stored.
+    await expectRejected(upload(w.s1, entryId, await photo(), "a\u0000b.png", "image/png"), 400, "malformed_upload", await snapshot());
+    // A right-to-left override (which could disguise "gpj.exe" as "exe.jpg") is dropped.
+    const bidi = await upload(w.s1, entryId, await photo(), "a\u202eb.png", "image/png");
+    expect(bidi.status).toBe(201);
+    expect(bidi.body.file.name).toBe("ab.webp");
     const long = await upload(w.s1, entryId, await photo(), `${"é".repeat(300)}.png`, "image/png");
     expect(Array.from(long.body.file.name as string).length).toBe(105);
     // Nothing escaped the uploads directory, and every stored name is the server's own pattern.

@@ -1,4 +1,5 @@
-import { ROLE_HOME, type PublicUser, type Role } from "@shared/api/auth";
+import { ROLE_HOME, type Role } from "@shared/api/roles";
+import type { PublicUser } from "@shared/api/auth";
 import { paths } from "@/config/paths";
 
 export interface NavItem {

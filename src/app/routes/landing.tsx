@@ -1,5 +1,5 @@
 import { Link } from "react-router";
-import { ROLE_HOME } from "@shared/api/auth";
+import { ROLE_HOME } from "@shared/api/roles";
 import { useMe } from "@/api/auth";
 import { paths } from "@/config/paths";
 import { ButtonLink } from "@/components/ui/button";

@@ -1,4 +1,4 @@
-import { ROLE_HOME, type Role } from "@shared/api/auth";
+import { ROLE_HOME, type Role } from "@shared/api/roles";
 import { ButtonLink } from "@/components/ui/button";
 import { PageBody } from "@/components/ui/page-header";
 

@@ -1,5 +1,5 @@
 import { Link, useNavigate, useSearchParams } from "react-router";
-import { ROLE_HOME } from "@shared/api/auth";
+import { ROLE_HOME } from "@shared/api/roles";
 import { isSafeNext, paths } from "@/config/paths";
 import { LogoMark } from "@/components/ui/logo-mark";
 import { SignInForm } from "@/features/auth/sign-in-form";

@@ -18,7 +18,7 @@ export function AdminSection() {
     <>
       {me.data?.role === "admin" ? (
         <nav aria-label="School admin" className="border-b border-soot-700 bg-soot-900">
-          <ul className="mx-auto flex max-w-page gap-1 overflow-x-auto px-gutter">
+          <ul className="mx-auto flex max-w-page gap-1 relative overflow-x-auto px-gutter">
             {LINKS.map((link) => (
               <li key={link.to} className="shrink-0">
                 <NavLink

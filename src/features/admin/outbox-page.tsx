@@ -99,13 +99,13 @@ function MessageBody({ id, message }: { id: string; message: OutboxSummary }) {
   return (
     <div id={id} className="border-t border-bone-200 px-4 py-3">
       <p className="text-xs text-soot-600">From {message.from}</p>
-      <pre className="mt-2 max-h-96 overflow-auto whitespace-pre-wrap break-words rounded-md bg-bone-100 p-3 font-mono text-xs text-soot-900">{message.text}</pre>
+      <pre className="mt-2 max-h-96 relative overflow-auto whitespace-pre-wrap break-words rounded-md bg-bone-100 p-3 font-mono text-xs text-soot-900">{message.text}</pre>
       {detail.data?.html ? (
         <div className="mt-2">
           <Button variant="ghost" className="min-h-9 px-3" onClick={() => setShowHtml((v) => !v)} aria-expanded={showHtml}>
             {showHtml ? "Hide" : "Show"} the HTML part (source)
           </Button>
-          {showHtml ? <pre className="mt-2 max-h-72 overflow-auto whitespace-pre-wrap break-all rounded-md bg-soot-900 p-3 font-mono text-2xs text-ash-200">{detail.data.html}</pre> : null}
+          {showHtml ? <pre className="mt-2 max-h-72 relative overflow-auto whitespace-pre-wrap break-all rounded-md bg-soot-900 p-3 font-mono text-2xs text-ash-200">{detail.data.html}</pre> : null}
         </div>
       ) : null}
     </div>

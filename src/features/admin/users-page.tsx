@@ -95,7 +95,7 @@ export function Component() {
         <Loaded query={users} label="users">
           {(data) => (
             <>
-              <div className="overflow-x-auto rounded-lg border border-bone-300 bg-white shadow-card">
+              <div className="relative overflow-x-auto rounded-lg border border-bone-300 bg-white shadow-card">
                 <table className="w-full min-w-[46rem] text-left text-sm">
                   <caption className="sr-only">Accounts, {data.total} in all</caption>
                   <thead className="bg-bone-100 text-soot-700">

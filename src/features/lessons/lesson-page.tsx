@@ -198,7 +198,7 @@ function LessonView({ position, Content, savedChecks, savedSections, lastSection
             </div>
           </div>
           <aside className="print-hide hidden lg:block">
-            <div className="sticky top-6 max-h-[calc(100dvh-3rem)] overflow-y-auto pb-6">
+            <div className="sticky top-24 max-h-[calc(100dvh-7rem)] overflow-y-auto pb-6">
               <TableOfContents sections={lesson.sections} current={current} reached={reached} />
               <button type="button" onClick={() => window.print()} className="mt-6 text-sm font-semibold text-quench-700 underline underline-offset-4 hover:text-quench-800">
                 Print this lesson

@@ -56,7 +56,7 @@ export function Component() {
 function ModuleCard({ module }: { module: ModuleOutline }) {
   const read = module.lessons.filter((l) => lessonState(l) === "completed").length;
   return (
-    <section id={`module-${module.slug}`} aria-labelledby={`module-${module.slug}-title`} className="scroll-mt-6">
+    <section id={`module-${module.slug}`} aria-labelledby={`module-${module.slug}-title`} className="scroll-mt-24">
       <div className="grid gap-5 md:grid-cols-[12rem_minmax(0,1fr)]">
         <div>
           <p className="font-display text-5xl font-semibold leading-none text-ember-600" aria-hidden="true">

@@ -168,7 +168,7 @@ function CohortTable({ cohorts }: { cohorts: OverviewCohort[] }) {
           No cohorts yet. Create one with <strong>New cohort</strong>, then invite students by e-mail or import a roster.
         </p>
       ) : (
-        <div className="mt-4 overflow-x-auto rounded-lg border border-bone-300 bg-white shadow-card">
+        <div className="mt-4 relative overflow-x-auto rounded-lg border border-bone-300 bg-white shadow-card">
           <table className="w-full min-w-[34rem] text-left text-sm">
             <caption className="sr-only">Your cohorts: students, how many are behind, completion of the work set, next due date</caption>
             <thead className="bg-bone-100 text-soot-700">

@@ -179,7 +179,7 @@ export function GradebookTable({ book }: { book: Gradebook }) {
         {rows.length} of {book.students.length} students shown. ✓ passed, ✗ not yet passed. Scores are shares of the quiz's marks.
       </p>
 
-      <div className="mt-2 max-h-[70vh] overflow-auto rounded-lg border border-bone-300 bg-white shadow-card" tabIndex={0} role="region" aria-label="Gradebook table, scrolls in both directions">
+      <div className="mt-2 max-h-[70vh] relative overflow-auto rounded-lg border border-bone-300 bg-white shadow-card" tabIndex={0} role="region" aria-label="Gradebook table, scrolls in both directions">
         <table className="w-max min-w-full border-separate border-spacing-0 text-left text-sm">
           <caption className="sr-only">
             Gradebook of {book.cohort.name}: one row per student, one column per quiz. Column headers sort the table.

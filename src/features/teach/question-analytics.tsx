@@ -72,7 +72,7 @@ export function QuestionAnalytics({ quizzes }: { quizzes: QuizAnalytics[] }) {
         </figure>
       )}
 
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="w-full min-w-[32rem] text-left text-sm">
           <caption className="sr-only">Each question of {quiz.title}: share correct and the most common wrong answers</caption>
           <thead className="text-soot-700">

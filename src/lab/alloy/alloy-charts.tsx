@@ -13,6 +13,9 @@ const CARBIDE_FILL: Record<CarbideType, { fill: string; label: string }> = {
 };
 const TYPES: CarbideType[] = ["MC", "M6C", "M7C3", "M23C6", "M3C"];
 
+/** Legend labels in body text colour (the series colours alone would not reach 4.5:1 on white). */
+const legendText = (value: string) => <span style={{ color: "#38322c" }}>{value}</span>;
+
 function shortName(r: AlloyReport, i: number): string {
   const n = r.alloy.name;
   return `${["■", "●", "▲"][i]} ${n.length > 16 ? `${n.slice(0, 15)}…` : n}`;
@@ -54,7 +57,7 @@ export function CarbideChart({ reports }: { reports: readonly AlloyReport[] }) {
           {present.map((t) => (
             <Bar key={t} dataKey={t} stackId="c" fill={CARBIDE_FILL[t].fill} name={CARBIDE_FILL[t].label} stroke="#ffffff" strokeWidth={1} isAnimationActive={false} />
           ))}
-          <ChartLegend wrapperStyle={{ fontSize: 11 }} />
+          <ChartLegend wrapperStyle={{ fontSize: 11 }} formatter={legendText} />
         </BarChart>
       </ResponsiveContainer>
     </ChartFigure>
@@ -93,7 +96,7 @@ export function IndexChart({ reports }: { reports: readonly AlloyReport[] }) {
           <Bar dataKey="edge" name="Edge retention (quartz)" fill="#c2500b" isAnimationActive={false} />
           <Bar dataKey="alumina" name="Sharpening, aluminium oxide" fill="#2d6488" isAnimationActive={false} />
           <Bar dataKey="diamond" name="Sharpening, diamond" fill="#a39a8f" stroke="#38322c" isAnimationActive={false} />
-          <ChartLegend wrapperStyle={{ fontSize: 11 }} />
+          <ChartLegend wrapperStyle={{ fontSize: 11 }} formatter={legendText} />
         </BarChart>
       </ResponsiveContainer>
     </ChartFigure>
@@ -125,7 +128,7 @@ export function RetainedAusteniteChart({ reports, coldTreatmentC }: { reports: r
           <YAxis tick={AXIS_TICK} width={36} unit="%" />
           <Bar dataKey="room" name="at 20 °C" fill="#9a3e08" isAnimationActive={false} />
           <Bar dataKey="cold" name={`after ${coldTreatmentC} °C`} fill="#68a0c6" stroke="#214c69" isAnimationActive={false} />
-          <ChartLegend wrapperStyle={{ fontSize: 11 }} />
+          <ChartLegend wrapperStyle={{ fontSize: 11 }} formatter={legendText} />
         </BarChart>
       </ResponsiveContainer>
     </ChartFigure>

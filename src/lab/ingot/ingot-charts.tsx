@@ -60,7 +60,7 @@ export function SegregationChart({ run, element }: { run: IngotRun; element: Ing
         <LineChart data={data} margin={{ top: 8, right: 12, bottom: 14, left: 0 }} accessibilityLayer={false}>
           <CartesianGrid stroke={GRID_STROKE} />
           <XAxis dataKey="x" type="number" domain={[0, run.radiusM * 1000]} tick={AXIS_TICK} unit=" mm" label={{ value: "distance from the wall", position: "insideBottom", offset: -8, fontSize: 11, fill: "#38322c" }} />
-          <YAxis domain={[0, SEGREGATION_MAX]} allowDataOverflow tick={AXIS_TICK} width={36} tickFormatter={(v: number) => `${v}×`} />
+          <YAxis domain={[0, SEGREGATION_MAX]} ticks={[0, 0.5, 1, 1.5, 2, 2.5, 3]} allowDataOverflow tick={AXIS_TICK} width={42} tickFormatter={(v: number) => `${v}×`} />
           <ReferenceLine y={1} stroke="#524a43" strokeWidth={1} />
           {run.tracked.map((el) => (
             <Line
@@ -103,7 +103,7 @@ export function LastLiquidChart({ run }: { run: IngotRun }) {
     () => Array.from({ length: run.cells - 1 }, (_, i) => ({ x: distanceMm(run, i), V: v?.[i] ?? null, C: c?.[i] ?? null })),
     [run, v, c],
   );
-  const yMax = Math.max(MC_LAST_LIQUID_V_THRESHOLD_MASS_PCT * 1.6, 6);
+  const yMax = 20;
   return (
     <ChartFigure
       title="The last liquid between the dendrite arms"
@@ -138,7 +138,7 @@ export function LastLiquidChart({ run }: { run: IngotRun }) {
         <LineChart data={data} margin={{ top: 8, right: 12, bottom: 14, left: 0 }} accessibilityLayer={false}>
           <CartesianGrid stroke={GRID_STROKE} />
           <XAxis dataKey="x" type="number" domain={[0, run.radiusM * 1000]} tick={AXIS_TICK} unit=" mm" label={{ value: "distance from the wall", position: "insideBottom", offset: -8, fontSize: 11, fill: "#38322c" }} />
-          <YAxis domain={[0, yMax]} allowDataOverflow tick={AXIS_TICK} width={36} unit="%" />
+          <YAxis domain={[0, yMax]} ticks={[0, 5, 10, 15, 20]} allowDataOverflow tick={AXIS_TICK} width={42} unit="%" />
           <ReferenceLine y={MC_LAST_LIQUID_V_THRESHOLD_MASS_PCT} stroke={ELEMENT_STYLE.V.stroke} strokeDasharray="2 2" label={{ value: "MC threshold", position: "insideTopRight", fontSize: 10, fill: "#9a3e08" }} />
           {v ? <Line dataKey="V" stroke={ELEMENT_STYLE.V.stroke} strokeDasharray={ELEMENT_STYLE.V.dash} strokeWidth={3} dot={false} isAnimationActive={false} /> : null}
           {c ? <Line dataKey="C" stroke={ELEMENT_STYLE.C.stroke} strokeWidth={2.5} dot={false} isAnimationActive={false} /> : null}

@@ -76,6 +76,8 @@ export function SurfaceCanvas({ ref, state, mode, sizePx, scratchTool, scratchPa
 
   return (
     <div
+      role="img"
+      aria-label={`Steel surface, ${L} × ${L} sites: film, rust and bare metal. The summary below describes it.`}
       className="relative overflow-hidden rounded-md border border-soot-700 bg-soot-950"
       style={{ width: sizePx, height: sizePx, touchAction: scratchTool ? "none" : "auto", cursor: scratchTool ? "crosshair" : "default" }}
       onPointerDown={(e) => {

@@ -71,8 +71,7 @@ export function CoolingRateChart({ result, inputs }: { result: PowderClasses; in
           Log–log. Line: cooling rate of a liquid droplet at the liquidus moving at the initial slip speed through the gas (Ranz–Marshall).
           Diamonds: mean cooling rate of each size class in flight, from leaving the nozzle to nucleation — lower, because droplets speed up
           with the gas. From {formatScientific(first.coolingRateKPerS)} K/s at {formatNumber(first.diameterM * 1e6, 2)} µm to{" "}
-          {formatScientific(last.coolingRateKPerS)} K/s at {formatNumber(last.diameterM * 1e6, 2)} µm; a slope of about −2 means the rate
-          falls with the square of the size.
+          {formatScientific(last.coolingRateKPerS)} K/s at {formatNumber(last.diameterM * 1e6, 2)} µm; a slope between −1.5 and −2 means the rate falls almost with the square of the size.
         </>
       }
     >

@@ -42,7 +42,7 @@ const COLOURS = {
 export function TowerCanvas({ ref, classes, layout, towerRef, gasLabel, widthPx, stale }: TowerCanvasProps) {
   const narrow = widthPx < 520;
   const heightPx = narrow ? 400 : 460;
-  const axisW = 46;
+  const axisW = narrow ? 50 : 68;
   const labelW = narrow ? 0 : 170;
   const chamberX = axisW + 6;
   const chamberW = Math.max(140, widthPx - chamberX - labelW - 10);
@@ -108,7 +108,7 @@ export function TowerCanvas({ ref, classes, layout, towerRef, gasLabel, widthPx,
     let lastY = -Infinity;
     for (const fall of depthTicks(layout.heightM)) {
       const y = yOf(fall);
-      if (y - lastY < 20) continue;
+      if (y - lastY < 24) continue;
       lastY = y;
       c.beginPath();
       c.moveTo(chamberX - 5, y);
@@ -116,35 +116,14 @@ export function TowerCanvas({ ref, classes, layout, towerRef, gasLabel, widthPx,
       c.stroke();
       c.fillText(formatDepth(fall), chamberX - 8, y);
     }
-    c.save();
-    c.translate(12, (top + bottom) / 2);
-    c.rotate(-Math.PI / 2);
-    c.textAlign = "center";
-    c.font = "500 11px 'Inter Variable', system-ui, sans-serif";
-    c.fillText("distance below the nozzle (√ scale)", 0, 0);
-    c.restore();
-    // Where the fine, median and coarse droplets are solid.
-    c.font = "500 11px 'Inter Variable', system-ui, sans-serif";
-    for (const m of markers) {
-      if (!Number.isFinite(m.fallM) || m.fallM > layout.heightM) continue;
-      const y = yOf(m.fallM);
-      c.strokeStyle = COLOURS.marker;
-      c.setLineDash([3, 3]);
-      c.beginPath();
-      c.moveTo(chamberX, y);
-      c.lineTo(chamberX + chamberW + (narrow ? 0 : 8), y);
-      c.stroke();
-      c.setLineDash([]);
-      c.fillStyle = COLOURS.marker;
-      if (narrow) {
-        c.textAlign = "right";
-        c.fillText(`${m.label}: solid`, chamberX + chamberW - 4, y - 8);
-      } else {
-        c.textAlign = "left";
-        c.fillText(`${m.label}`, chamberX + chamberW + 12, y - 7);
-        c.fillStyle = COLOURS.muted;
-        c.fillText("fully solid here", chamberX + chamberW + 12, y + 7);
-      }
+    if (!narrow) {
+      c.save();
+      c.translate(12, (top + bottom) / 2);
+      c.rotate(-Math.PI / 2);
+      c.textAlign = "center";
+      c.font = "500 11px 'Inter Variable', system-ui, sans-serif";
+      c.fillText("distance below the nozzle (√ scale)", 0, 0);
+      c.restore();
     }
   };
 
@@ -182,7 +161,40 @@ export function TowerCanvas({ ref, classes, layout, towerRef, gasLabel, widthPx,
         }
       }
       c.restore();
+      drawMarkers(c);
     });
+  };
+
+  // Where the fine, median and coarse droplets are solid: drawn over the droplets, on a dark label.
+  const drawMarkers = (c: CanvasRenderingContext2D) => {
+    c.font = "500 11px 'Inter Variable', system-ui, sans-serif";
+    c.textBaseline = "middle";
+    for (const m of markers) {
+      if (!Number.isFinite(m.fallM) || m.fallM > layout.heightM) continue;
+      const y = yOf(m.fallM);
+      c.strokeStyle = COLOURS.marker;
+      c.setLineDash([3, 3]);
+      c.beginPath();
+      c.moveTo(chamberX, y);
+      c.lineTo(chamberX + chamberW + (narrow ? 0 : 8), y);
+      c.stroke();
+      c.setLineDash([]);
+      c.fillStyle = COLOURS.marker;
+      if (narrow) {
+        const text = `${m.label}: solid`;
+        const w = c.measureText(text).width;
+        c.fillStyle = "rgba(15,13,11,0.8)";
+        c.fillRect(chamberX + chamberW - w - 8, y - 15, w + 6, 14);
+        c.fillStyle = COLOURS.marker;
+        c.textAlign = "right";
+        c.fillText(text, chamberX + chamberW - 5, y - 8);
+      } else {
+        c.textAlign = "left";
+        c.fillText(`${m.label}`, chamberX + chamberW + 12, y - 7);
+        c.fillStyle = COLOURS.muted;
+        c.fillText("fully solid here", chamberX + chamberW + 12, y + 7);
+      }
+    }
   };
 
   return (

@@ -30,8 +30,10 @@ export function usePowderRun(inputs: PowderRunInputs): PowderRunState {
           case "progress":
             return { ...old, progress: m.fraction, stage: m.stage };
           case "classes":
+            if (window.__simBench) (window as unknown as { __powderTimings?: unknown[] }).__powderTimings?.push({ stage: "droplets", computeMs: m.computeMs });
             return { ...old, result: m.result, computing: false, stage: "ingot", progress: 0, error: null, computeMs: m.computeMs };
           case "comparison":
+            if (window.__simBench) (window as unknown as { __powderTimings?: unknown[] }).__powderTimings?.push({ stage: "ingot", computeMs: m.computeMs });
             return { ...old, comparison: m.comparison, stage: null };
           case "error":
             return { ...old, computing: false, stage: null, error: m.message };

@@ -43,7 +43,7 @@ export function decadeTicks(min: number, max: number): number[] {
 
 export function decadeLabel(v: number): string {
   const e = Math.round(Math.log10(v));
-  if (e >= -2 && e <= 4) return String(v);
+  if (e >= -2 && e <= 3) return String(v);
   const sup: Record<string, string> = { "-": "⁻", "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹" };
   return `10${String(e).split("").map((c) => sup[c] ?? c).join("")}`;
 }

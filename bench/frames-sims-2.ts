@@ -1,0 +1,229 @@
+/**
+ * Frame-time and compute benchmark of the second set of simulations (issue 5) in a real browser:
+ * the ingot playback, the atomising tower, and the alloy explorer's cost per slider move, in the
+ * built app served by createApp, driven by playwright-core with Debian's Chromium.
+ *
+ *   npx vite build && node --import tsx bench/frames-sims-2.ts
+ *
+ * The page is opened with `window.__simBench = true`: the simulations then record a
+ * `performance.measure` per frame ("ingot:frame" + "ingot:draw", "powder:step" + "powder:draw") and
+ * per recomputation ("alloy:compute"), and the ingot and powder hooks push their workers' compute
+ * times to `window.__ingotTimings` / `window.__powderTimings`. A requestAnimationFrame recorder gives
+ * the frame intervals. Results are merged into bench/results.json under browser.ingot,
+ * browser.powder and browser.alloy, leaving every other key alone.
+ */
+import { existsSync, readFileSync, writeFileSync } from "node:fs";
+import { cpus, loadavg } from "node:os";
+import { fileURLToPath } from "node:url";
+import type { Browser, Page } from "playwright-core";
+import { launchBrowser, startTestServer } from "../tests/support/browser";
+
+const RESULTS = fileURLToPath(new URL("./results.json", import.meta.url));
+const MEASURE_MS = Number(process.env.BENCH_MEASURE_MS ?? 8000);
+
+interface Stats {
+  medianMs: number;
+  p90Ms: number;
+  meanMs: number;
+  samples: number;
+}
+
+const round = (v: number) => Math.round(v * 1000) / 1000;
+
+function stats(values: number[]): Stats {
+  const sorted = [...values].sort((a, b) => a - b);
+  const q = (p: number) => {
+    if (sorted.length === 0) return NaN;
+    const pos = (sorted.length - 1) * p;
+    const lo = Math.floor(pos);
+    const hi = Math.ceil(pos);
+    return sorted[lo] + (sorted[hi] - sorted[lo]) * (pos - lo);
+  };
+  const mean = sorted.reduce((s, v) => s + v, 0) / Math.max(1, sorted.length);
+  return { medianMs: round(q(0.5)), p90Ms: round(q(0.9)), meanMs: round(mean), samples: sorted.length };
+}
+
+async function summaryText(page: Page): Promise<string> {
+  return (await page.getByTestId("live-summary").textContent()) ?? "";
+}
+
+async function waitForSummary(page: Page, pattern: RegExp, timeout = 90_000): Promise<void> {
+  await page.waitForFunction(
+    ([source, flags]) => new RegExp(source, flags).test(document.querySelector("[data-testid=live-summary]")?.textContent ?? ""),
+    [pattern.source, pattern.flags] as const,
+    { timeout },
+  );
+}
+
+/** rAF intervals and the named measures over MEASURE_MS (scripts as strings: the page has no tsx helpers). */
+async function recordFrames(page: Page, names: string[]) {
+  await page.evaluate(`(() => {
+    performance.clearMeasures();
+    window.__frames = [];
+    window.__recording = true;
+    let last = performance.now();
+    const tick = (t) => { window.__frames.push(t - last); last = t; if (window.__recording) requestAnimationFrame(tick); };
+    requestAnimationFrame(tick);
+  })()`);
+  await page.waitForTimeout(MEASURE_MS);
+  const raw = (await page.evaluate(`(() => {
+    window.__recording = false;
+    const out = { frames: window.__frames.slice(1) };
+    for (const name of ${JSON.stringify(names)}) out[name] = performance.getEntriesByName(name, "measure").map((e) => ({ start: e.startTime, duration: e.duration }));
+    return out;
+  })()`)) as { frames: number[] } & Record<string, { start: number; duration: number }[]>;
+  // Per-frame compute: the measures of the first name paired with the next measure of each other name within 8 ms.
+  const [first, ...rest] = names;
+  const perFrame = raw[first].map((s) => {
+    let total = s.duration;
+    for (const name of rest) {
+      const next = raw[name].find((e) => e.start >= s.start && e.start - s.start < 8);
+      if (next) total += next.duration;
+    }
+    return total;
+  });
+  const byName = Object.fromEntries(names.map((n) => [n, stats(raw[n].map((e) => e.duration))]));
+  return {
+    frameIntervalMs: stats(raw.frames),
+    computePerFrameMs: stats(perFrame),
+    measures: byName,
+    framesOver16_7ms: raw.frames.filter((f) => f > 1000 / 60 + 1).length,
+    frames: raw.frames.length,
+  };
+}
+
+async function newBenchPage(browser: Browser): Promise<Page> {
+  const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, reducedMotion: "no-preference" });
+  await context.addInitScript(() => {
+    const w = window as unknown as Record<string, unknown>;
+    w.__simBench = true;
+    w.__ingotTimings = [];
+    w.__powderTimings = [];
+  });
+  return context.newPage();
+}
+
+/** Wall time from a slider change to the live summary showing the new state. */
+async function timedChange(page: Page, slider: string, value: string, expect: RegExp): Promise<number> {
+  const start = Date.now();
+  await page.getByRole("slider", { name: slider }).fill(value);
+  await waitForSummary(page, expect);
+  return Date.now() - start;
+}
+
+async function benchIngot(browser: Browser, baseUrl: string) {
+  const page = await newBenchPage(browser);
+  await page.goto(`${baseUrl}/lab/ingot?grade=D2&sizeMm=1500&mould=sand`);
+  await waitForSummary(page, /^At .* 1500 mm ingot is/);
+  // Playing (20 s for the whole freeze at 1×): every frame interpolates 50 nodes and redraws the section.
+  const playback = await recordFrames(page, ["ingot:frame", "ingot:draw"]);
+  // Compute per slider move: the worker runs the solver to the last liquid (plus the Chvorinov sweep).
+  const moves: { sizeMm: number; summaryLatencyMs: number }[] = [];
+  for (const sizeMm of [200, 600, 1200, 300]) {
+    const latency = await timedChange(page, "Ingot diameter", String(sizeMm), new RegExp(`${sizeMm} mm ingot`));
+    moves.push({ sizeMm, summaryLatencyMs: latency });
+  }
+  const timings = (await page.evaluate("window.__ingotTimings")) as { computeMs: number; busyMs: number }[];
+  await page.context().close();
+  return {
+    description:
+      "ingot section, D2, 1500 mm sand mould, playing at 1×: per frame the recorded frames are interpolated (50 nodes) and the section redrawn in one Konva Shape (100 half-rings, fronts, carbides); slider moves rerun the solver in the Web Worker (time-sliced, 24 ms slices) while the old run stays on screen with a progress bar",
+    playback,
+    workerRunPerSliderMove: {
+      computeMs: stats(timings.slice(1).map((t) => t.computeMs)),
+      busyMs: stats(timings.slice(1).map((t) => t.busyMs)),
+      runs: timings.map((t) => ({ computeMs: round(t.computeMs), busyMs: round(t.busyMs) })),
+    },
+    sliderMoves: moves,
+  };
+}
+
+async function benchPowder(browser: Browser, baseUrl: string) {
+  const page = await newBenchPage(browser);
+  await page.goto(`${baseUrl}/lab/powder?grade=A11`);
+  await waitForSummary(page, /times finer/);
+  const playback = await recordFrames(page, ["powder:step", "powder:draw"]);
+  const moves: { gasVelocityMPerS: number; summaryLatencyMs: number }[] = [];
+  for (const v of [50, 200, 300, 100]) {
+    moves.push({ gasVelocityMPerS: v, summaryLatencyMs: await timedChange(page, "Gas velocity", String(v), new RegExp(`nitrogen at ${v} m/s`)) });
+  }
+  const timings = (await page.evaluate("window.__powderTimings")) as { stage: string; computeMs: number }[];
+  await page.context().close();
+  return {
+    description:
+      "atomising tower, A11, D50 80 µm, σg 2, N2 at 100 m/s: about 140 droplets in flight, each read from its size class's recorded flight and drawn in one Konva Shape; slider moves recompute the 14 droplet flights (core simulateDropletFlight) in the Web Worker, then the comparison ingot",
+    playback,
+    workerPerSliderMove: {
+      dropletClassesMs: stats(timings.filter((t) => t.stage === "droplets").slice(1).map((t) => t.computeMs)),
+      comparisonIngotMs: stats(timings.filter((t) => t.stage === "ingot").map((t) => t.computeMs)),
+    },
+    sliderMoves: moves,
+  };
+}
+
+async function benchAlloy(browser: Browser, baseUrl: string) {
+  const page = await newBenchPage(browser);
+  await page.goto(`${baseUrl}/lab/alloy?a=440C&a=D2&a=A11`);
+  await waitForSummary(page, /^Comparing/);
+  // Input-to-paint latency of each slider step: from the input event to the second animation frame after it.
+  await page.evaluate(`(() => {
+    performance.clearMeasures();
+    window.__latencies = [];
+    document.addEventListener("input", () => {
+      const t0 = performance.now();
+      requestAnimationFrame(() => requestAnimationFrame((t) => window.__latencies.push(t - t0)));
+    }, true);
+  })()`);
+  const slider = page.getByRole("slider", { name: "Carbon (C)" });
+  await slider.focus();
+  for (let k = 0; k < 40; k++) {
+    await page.keyboard.press(k < 20 ? "ArrowRight" : "ArrowLeft");
+    await page.waitForTimeout(60);
+  }
+  const raw = (await page.evaluate(`(() => ({
+    compute: performance.getEntriesByName("alloy:compute", "measure").map((e) => e.duration),
+    latency: window.__latencies,
+  }))()`)) as { compute: number[]; latency: number[] };
+  await page.context().close();
+  return {
+    description:
+      "alloy explorer with three alloys (440C, D2, A11): 40 keyboard steps of the carbon slider of the first alloy; each step recomputes that alloy's figures on the main thread (carbide allocation, hardened state, Ms, wear indices, freezing, DI) and re-renders the figures and charts",
+    computePerSliderMoveMs: stats(raw.compute),
+    inputToPaintMs: stats(raw.latency),
+  };
+}
+
+async function main() {
+  const server = await startTestServer();
+  const browser = await launchBrowser();
+  try {
+    const ingot = await benchIngot(browser, server.baseUrl);
+    console.log("ingot", JSON.stringify(ingot, null, 2));
+    const powder = await benchPowder(browser, server.baseUrl);
+    console.log("powder", JSON.stringify(powder, null, 2));
+    const alloy = await benchAlloy(browser, server.baseUrl);
+    console.log("alloy", JSON.stringify(alloy, null, 2));
+    // Re-read just before writing: another benchmark may have merged its keys meanwhile.
+    const results = existsSync(RESULTS) ? JSON.parse(readFileSync(RESULTS, "utf8")) : {};
+    const at = new Date().toISOString();
+    results.browser = {
+      ...(results.browser ?? {}),
+      ingot: { ...ingot, measuredAt: at },
+      powder: { ...powder, measuredAt: at },
+      alloy: { ...alloy, measuredAt: at },
+      environmentSims2: {
+        chromium: browser.version(),
+        cpus: cpus().length,
+        loadAverage1m: round(loadavg()[0]),
+        note: "headless Chromium (--disable-gpu) on the 2-core reference machine; other jobs may share the CPU",
+      },
+    };
+    writeFileSync(RESULTS, `${JSON.stringify(results, null, 2)}\n`);
+    console.log(`merged into ${RESULTS} (browser.ingot, browser.powder, browser.alloy)`);
+  } finally {
+    await browser.close();
+    await server.close();
+  }
+}
+
+await main();
