@@ -119,7 +119,7 @@ async function benchCarbides(browser: Browser, baseUrl: string) {
   const page = await newBenchPage(browser);
   // Annealed 1095-type on a 90 µm field: about 5,000 cementite particles; Play runs the coarsening clock,
   // so every frame reselects the visible particles and redraws them all.
-  await page.goto(`${baseUrl}/lab/carbides?grade=1095&state=annealed&fieldUm=90&austenitizingTempC=760`);
+  await page.goto(`${baseUrl}/lab/carbides?grade=1095&state=annealed&fieldUm=90&austenitizingTempC=820`);
   await waitForSummary(page, /particles drawn/);
   const particlesAtStart = Number(/(\d+) particles drawn/.exec(await summaryText(page))?.[1] ?? NaN);
   await page.getByRole("button", { name: "Play" }).click();
@@ -127,7 +127,7 @@ async function benchCarbides(browser: Browser, baseUrl: string) {
   const particlesAtEnd = Number(/(\d+) particles drawn/.exec(await summaryText(page))?.[1] ?? NaN);
   await page.context().close();
   return {
-    description: "carbide field, annealed 1095-type, 90 µm field, coarsening clock running: per frame the visible particles are reselected (LSW growth, no overlap) and all are redrawn in one Konva Shape",
+    description: "carbide field, annealed 1095-type, 90 µm field, coarsening at 820 °C (radii grow ≈ 0.05 % per frame): per frame the visible particles are reselected (LSW growth, no overlap), small ones stamped into one Konva.Image and large ones drawn in one Konva Shape",
     particlesAtStart,
     particlesAtEnd,
     ...result,

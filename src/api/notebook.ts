@@ -27,8 +27,8 @@ export const notebookListQueryOptions = () =>
     queryFn: ({ signal }) => api.get<NotebookListResponse>("/api/notebook/entries", signal),
   });
 
-export function useNotebookList() {
-  return useQuery(notebookListQueryOptions());
+export function useNotebookList(enabled = true) {
+  return useQuery({ ...notebookListQueryOptions(), enabled });
 }
 
 export const notebookEntryQueryOptions = (id: number) =>

@@ -70,7 +70,7 @@ describe("ingot simulation", () => {
       const { context, page, problems } = await openPage(browser, viewport);
       await page.goto(`${server.baseUrl}/lab/ingot`);
       await waitForSummary(page, /fully solid/);
-      await page.getByRole("heading", { name: "Freezing time against casting modulus" }).waitFor().catch(() => undefined);
+      await page.getByText("Freezing time (minutes) against casting modulus").waitFor();
       await fontsReady(page);
       expect(await seriousAxeViolations(page)).toEqual([]);
       await screenshot(page, `lab-ingot-${viewport.width}`);

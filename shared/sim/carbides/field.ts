@@ -100,11 +100,12 @@ export function selectVisible(
   const nx = Math.max(1, Math.min(256, Math.floor(W / Math.max(2 * maxR, 1e-6))));
   const ny = Math.max(1, Math.min(256, Math.floor(H / Math.max(2 * maxR, 1e-6))));
   const cellW = W / nx, cellH = H / ny;
-  const head = new Int32Array(nx * ny).fill(-1);
-  const next = new Int32Array(count);
+  const ws = workspace(count, nx * ny);
+  const head = ws.head.fill(-1, 0, nx * ny);
+  const { next, chosenRadius } = ws;
+  // The returned arrays are fresh: a caller may keep an earlier selection.
   const index = new Int32Array(count);
   const radius = new Float64Array(count);
-  const chosenRadius = new Float64Array(count);
   let n = 0;
 
   for (let k = 0; k < count; k++) {
@@ -145,4 +146,13 @@ export function selectVisible(
   const target: Partial<Record<CarbideType, number>> = {};
   base.types.forEach((t, j) => { areaFraction[t] = got[j] / area; target[t] = goal[j] / area; });
   return { count: n, index: index.subarray(0, n), radiusUm: radius.subarray(0, n), areaFraction, targetFraction: target };
+}
+
+let shared = { head: new Int32Array(0), next: new Int32Array(0), chosenRadius: new Float64Array(0) };
+
+/** Scratch buffers of selectVisible, reused between calls (it runs every animation frame). */
+function workspace(count: number, cells: number) {
+  if (shared.next.length < count) shared = { ...shared, next: new Int32Array(count), chosenRadius: new Float64Array(count) };
+  if (shared.head.length < cells) shared = { ...shared, head: new Int32Array(cells) };
+  return shared;
 }

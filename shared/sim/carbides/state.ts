@@ -83,7 +83,12 @@ export function initialState(params: CarbideParams): CarbideSimState {
 /** Sets the time at temperature (h) and reselects the coarsened field. */
 export function setHours(state: CarbideSimState, hours: number): CarbideSimState {
   state.hours = Math.max(0, Math.min(100, hours));
-  state.growth = growthFactors(state.base.types, state.alloy.austenitizingTempC, state.hours);
+  const growth = growthFactors(state.base.types, state.alloy.austenitizingTempC, state.hours);
+  // Below a 0.01 % change in every radius since the last selection nothing visible moves: keep it
+  // (and its growth factors, so slow changes still add up).
+  const moved = state.base.types.some((t) => Math.abs((growth[t] ?? 1) / (state.growth[t] ?? 1) - 1) > 1e-4);
+  if (!moved) return state;
+  state.growth = growth;
   state.visible = selectVisible(state.base, targetFractions(state.population), state.growth);
   state.edge = null;
   state.wornEdge = null;

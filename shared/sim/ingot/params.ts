@@ -9,11 +9,9 @@ import type { Composition } from "../../metallurgy/composition";
 import { ELEMENT_RANGE_MASS_PCT } from "../alloy/element-ranges";
 import { isGradeId, resolveComposition } from "../alloy/grade-composition";
 
-export const INGOT_ELEMENTS = ["C", "Cr", "V", "Mo", "Mn", "Si"] as const;
-export type IngotElement = (typeof INGOT_ELEMENTS)[number];
+import { INGOT_ELEMENTS, MOULDS, type IngotElement, type Mould } from "./constants";
 
-export const MOULDS = ["sand", "metal", "water-cooled"] as const;
-export type Mould = (typeof MOULDS)[number];
+export { INGOT_ELEMENTS, MOULDS, type IngotElement, type Mould };
 
 export const SIZE_RANGE_MM = { min: 50, max: 1500 } as const;
 

@@ -34,7 +34,7 @@ export function CarbideChart({ reports }: { reports: readonly AlloyReport[] }) {
   return (
     <ChartFigure
       title="Carbide types and volume"
-      heightClass="h-72"
+      heightClass="h-80 @3xl:h-[30rem]"
       description={
         <>
           Volume per cent of each carbide type, annealed and after hardening.{" "}

@@ -1,4 +1,4 @@
-import { memo, useEffect, useMemo, useRef, useState } from "react";
+import { memo, useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
 import { z } from "zod";
 import {
   DEFAULT_ALLOYS,
@@ -101,6 +101,11 @@ export default function AlloyExplorer({ initial, onParamsChange }: AlloyExplorer
   const current = resolveAlloy(alloys[selectedIndex]);
   const currentComposition = current.composition as AlloyComposition;
   const summary = describeComparison(reports);
+  // The figures and charts re-render in a deferred pass: the slider and the summary answer at once,
+  // the heavy SVG follows when the browser is free (dimmed meanwhile, so the delay is visible).
+  const deferredReports = useDeferredValue(reports);
+  const deferredCold = useDeferredValue(coldTreatmentC);
+  const pending = deferredReports !== reports;
 
   const updateAlloy = (index: number, spec: AlloySpec) => setAlloys((old) => old.map((a, i) => (i === index ? spec : a)));
   const addAlloy = () => {
@@ -178,14 +183,16 @@ export default function AlloyExplorer({ initial, onParamsChange }: AlloyExplorer
         </div>
       </div>
       <LiveSummary text={summary} throttleMs={600} label="Key figures now" />
-      <div className="grid gap-4 @3xl:grid-cols-2">
-        <MemoCarbideChart reports={reports} />
-        <div className="space-y-4">
-          <MemoIndexChart reports={reports} />
-          <MemoRetainedAusteniteChart reports={reports} coldTreatmentC={coldTreatmentC} />
+      <div className={`space-y-5 transition-opacity ${pending ? "opacity-60" : ""}`} aria-busy={pending}>
+        <div className="grid gap-4 @3xl:grid-cols-2">
+          <MemoCarbideChart reports={deferredReports} />
+          <div className="space-y-4">
+            <MemoIndexChart reports={deferredReports} />
+            <MemoRetainedAusteniteChart reports={deferredReports} coldTreatmentC={deferredCold} />
+          </div>
         </div>
+        <MemoFigureBoard reports={deferredReports} />
       </div>
-      <MemoFigureBoard reports={reports} />
       <MemoAlloyMethod />
     </section>
   );

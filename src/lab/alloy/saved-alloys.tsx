@@ -1,5 +1,5 @@
 import { useId, useState, type FormEvent } from "react";
-import { Link, useLocation } from "react-router";
+import { Link, useLocation, useNavigate } from "react-router";
 import type { AlloyComposition, SavedAlloy } from "@shared/api/alloys";
 import { ALLOY_ELEMENTS, ALLOY_NAME_MAX, type CustomAlloySpec } from "@shared/sim/alloy/params";
 import { useMe } from "@/api/auth";
@@ -35,6 +35,7 @@ export function compositionText(composition: AlloyComposition): string {
 export function SavedAlloys({ current, onOpen }: SavedAlloysProps) {
   const me = useMe();
   const location = useLocation();
+  const navigate = useNavigate();
   const user = me.data ?? null;
   const saved = useSavedAlloys(user !== null);
   const save = useSaveAlloy();
@@ -50,7 +51,15 @@ export function SavedAlloys({ current, onOpen }: SavedAlloysProps) {
           Saved alloys
         </h3>
         <p className="mt-1 text-soot-700">
-          <Link className="font-semibold text-quench-700 underline underline-offset-4" to={signInPath(location.pathname + location.search)}>
+          <Link
+            className="font-semibold text-quench-700 underline underline-offset-4"
+            to={signInPath(location.pathname + location.search)}
+            onClick={(e) => {
+              // The explorer rewrites the address bar without the router: come back to the current comparison.
+              e.preventDefault();
+              navigate(signInPath(window.location.pathname + window.location.search));
+            }}
+          >
             Sign in
           </Link>{" "}
           to keep named alloys and open them later. The link in the address bar already holds this comparison.

@@ -1,11 +1,12 @@
 import { useEffect, useImperativeHandle, useMemo, useRef, useState, type Ref } from "react";
-import { Layer, Shape, Stage } from "react-konva";
+import { Image as KonvaImage, Layer, Shape, Stage } from "react-konva";
 import type Konva from "konva";
-import { createRandom, type CarbideType } from "@shared/metallurgy";
+import type { CarbideType } from "@shared/metallurgy";
 import type { BaseField, CarbideSimState, VisibleField } from "@shared/sim/carbides";
 import { measured } from "@/lab/shared-ui/bench-marks";
 import { carbideInfo } from "./carbide-info";
-import { CARBIDE_STYLE, MATRIX_COLOUR } from "./palette";
+import { DETAIL_RADIUS_PX, matrixPixels, stampSmallParticles } from "./field-raster";
+import { CARBIDE_STYLE } from "./palette";
 import { patternTile } from "./patterns";
 import { ScaleBar } from "./scale-bar";
 
@@ -23,8 +24,9 @@ interface FieldCanvasProps {
 }
 
 /**
- * The micrograph-like field: a static matrix layer (drawn once, cached) and one custom Shape that draws
- * every visible particle, grouped by type (one path, one fill, one pattern fill and one outline per type),
+ * The micrograph-like field in two Konva nodes: one Image whose pixels are the cached matrix picture with
+ * every small particle stamped in (software canvases rasterise thousands of tiny arcs slowly), and one
+ * custom Shape that draws the larger particles as vector discs with their type's pattern and outline,
  * with periodic copies at the borders. Hover or tap names the particle under the pointer.
  */
 export function FieldCanvas({ ref, sim, sizePx, label }: FieldCanvasProps) {
@@ -35,13 +37,29 @@ export function FieldCanvas({ ref, sim, sizePx, label }: FieldCanvasProps) {
   const simRef = useRef(sim);
   simRef.current = sim;
   const [hover, setHover] = useState<{ x: number; y: number; type: CarbideType } | null>(null);
+  // Device pixels of the raster (sharp on high-density screens, at most 2× to bound the cost).
+  const dpr = typeof window === "undefined" ? 1 : Math.min(2, window.devicePixelRatio || 1);
+  const rasterPx = Math.round(sizePx * dpr);
+  const raster = useMemo(() => {
+    const canvas = document.createElement("canvas");
+    canvas.width = rasterPx;
+    canvas.height = rasterPx;
+    const ctx = canvas.getContext("2d")!;
+    const image = ctx.createImageData(rasterPx, rasterPx);
+    return { canvas, ctx, image, pixels: new Uint32Array(image.data.buffer), background: matrixPixels(matrix, base.widthUm, rasterPx) };
+  }, [rasterPx, matrix, base.widthUm]);
 
   // Draw synchronously (measured for the frame benchmark), not on Konva's next batch.
-  const redraw = () => { measured("carbides:draw", () => { particleLayer.current?.draw(); }); };
+  const redraw = () => {
+    measured("carbides:draw", () => {
+      raster.pixels.set(raster.background);
+      stampSmallParticles(raster.pixels, rasterPx, simRef.current.base, simRef.current.visible);
+      raster.ctx.putImageData(raster.image, 0, 0);
+      particleLayer.current?.draw();
+    });
+  };
   useImperativeHandle(ref, () => ({ redraw }));
-  useEffect(() => { redraw(); }, [sim, sizePx]);
-
-  const background = useMemo(() => matrixTexture(matrix, base.widthUm), [matrix, base.widthUm]);
+  useEffect(() => { redraw(); }, [sim, sizePx, raster]);
 
   const find = (clientX: number, clientY: number, el: HTMLElement): { type: CarbideType; x: number; y: number } | null => {
     const rect = el.getBoundingClientRect();
@@ -73,27 +91,12 @@ export function FieldCanvas({ ref, sim, sizePx, label }: FieldCanvasProps) {
       onPointerLeave={(e) => { if (e.pointerType === "mouse") setHover(null); }}
     >
       <Stage width={sizePx} height={sizePx} listening={false}>
-        <Layer listening={false}>
-          <Shape
-            listening={false}
-            perfectDrawEnabled={false}
-            sceneFunc={(ctx) => {
-              const c = ctx._context;
-              c.fillStyle = matrix === "hardened" ? MATRIX_COLOUR.hardened : MATRIX_COLOUR.annealed;
-              c.fillRect(0, 0, sizePx, sizePx);
-              c.strokeStyle = matrix === "hardened" ? MATRIX_COLOUR.hardenedNeedle : MATRIX_COLOUR.annealedGrain;
-              c.lineWidth = matrix === "hardened" ? Math.max(1, scale * 0.25) : 1;
-              c.beginPath();
-              for (const [x1, y1, x2, y2] of background) { c.moveTo(x1 * scale, y1 * scale); c.lineTo(x2 * scale, y2 * scale); }
-              c.stroke();
-            }}
-          />
-        </Layer>
         <Layer ref={particleLayer} listening={false}>
+          <KonvaImage image={raster.canvas} width={sizePx} height={sizePx} listening={false} perfectDrawEnabled={false} />
           <Shape
             listening={false}
             perfectDrawEnabled={false}
-            sceneFunc={(ctx) => drawParticles(ctx._context, simRef.current.base, simRef.current.visible, scale)}
+            sceneFunc={(ctx) => drawLargeParticles(ctx._context, simRef.current.base, simRef.current.visible, scale, dpr)}
           />
         </Layer>
       </Stage>
@@ -111,62 +114,38 @@ export function FieldCanvas({ ref, sim, sizePx, label }: FieldCanvasProps) {
   );
 }
 
-function drawParticles(c: CanvasRenderingContext2D, base: BaseField, visible: VisibleField, scale: number): void {
+/** The particles too large to stamp: vector discs with the type's fill, pattern and outline. */
+function drawLargeParticles(c: CanvasRenderingContext2D, base: BaseField, visible: VisibleField, scale: number, dpr: number): void {
   const W = base.widthUm, H = base.heightUm;
   for (let t = 0; t < base.types.length; t++) {
     const type = base.types[t];
     const style = CARBIDE_STYLE[type];
-    c.beginPath();
+    const path = new Path2D();
     let any = false;
     for (let k = 0; k < visible.count; k++) {
       const i = visible.index[k];
-      if (base.typeIndex[i] !== t) continue;
-      any = true;
       const r = visible.radiusUm[k];
+      if (base.typeIndex[i] !== t || r * scale * dpr < DETAIL_RADIUS_PX) continue;
+      any = true;
       const x = base.xUm[i], y = base.yUm[i];
       // Periodic field: draw copies of particles that cross a border.
       const xs = x - r < 0 ? [x, x + W] : x + r > W ? [x, x - W] : [x];
       const ys = y - r < 0 ? [y, y + H] : y + r > H ? [y, y - H] : [y];
       for (const px of xs) for (const py of ys) {
-        c.moveTo((px + r) * scale, py * scale);
-        c.arc(px * scale, py * scale, r * scale, 0, Math.PI * 2);
+        path.moveTo((px + r) * scale, py * scale);
+        path.arc(px * scale, py * scale, r * scale, 0, Math.PI * 2);
       }
     }
     if (!any) continue;
     c.fillStyle = style.fill;
-    c.fill();
+    c.fill(path);
     const tile = patternTile(type);
     if (tile) {
       const pattern = c.createPattern(tile, "repeat");
-      if (pattern) { c.fillStyle = pattern; c.fill(); }
+      if (pattern) { c.fillStyle = pattern; c.fill(path); }
     }
     c.strokeStyle = style.mark;
     c.lineWidth = 1;
-    c.stroke();
+    c.stroke(path);
   }
-}
-
-/** Faint lines that suggest the matrix: martensite needles (hardened) or ferrite grain boundaries (annealed). */
-function matrixTexture(matrix: "annealed" | "hardened", sizeUm: number): [number, number, number, number][] {
-  const random = createRandom(matrix === "hardened" ? 17 : 29);
-  const lines: [number, number, number, number][] = [];
-  if (matrix === "hardened") {
-    const count = Math.round(sizeUm * sizeUm * 0.35);
-    for (let k = 0; k < count; k++) {
-      const x = random() * sizeUm, y = random() * sizeUm;
-      const angle = [0.5, 1.55, 2.6][Math.floor(random() * 3)] + (random() - 0.5) * 0.2;
-      const len = 0.8 + random() * 2.4;
-      lines.push([x, y, x + Math.cos(angle) * len, y + Math.sin(angle) * len]);
-    }
-  } else {
-    const cell = 6;
-    for (let gx = 0; gx < sizeUm; gx += cell) {
-      for (let gy = 0; gy < sizeUm; gy += cell) {
-        const x = gx + random() * cell, y = gy + random() * cell;
-        lines.push([x, y, x + cell * (0.6 + random() * 0.5), y + (random() - 0.5) * cell]);
-        lines.push([x, y, x + (random() - 0.5) * cell, y + cell * (0.6 + random() * 0.5)]);
-      }
-    }
-  }
-  return lines;
 }

@@ -12,7 +12,6 @@ import { describeIngotFrame } from "@shared/sim/ingot/summary";
 import { formatDuration } from "@shared/sim/alloy/format";
 import { Alert } from "@/components/ui/alert";
 import { measured } from "@/lab/shared-ui/bench-marks";
-import { LiveSummary } from "@/lab/shared-ui/live-summary";
 import { SimLayout } from "@/lab/shared-ui/sim-layout";
 import { TransportBar } from "@/lab/shared-ui/transport-bar";
 import { useAnimationFrame } from "@/lab/shared-ui/use-animation-frame";
@@ -24,6 +23,7 @@ import { ChvorinovChart, LastLiquidChart, ProfileChart, SegregationChart } from 
 import { IngotControls } from "./ingot-controls";
 import { IngotLegend } from "./ingot-legend";
 import { IngotMethod } from "./ingot-method";
+import { PlaybackReadout, type ReadoutUpdate } from "./playback-readout";
 import { CarbidePanel, FreezingPanel } from "./ingot-panels";
 import { useIngotRun } from "./use-ingot-run";
 
@@ -36,6 +36,7 @@ const MemoCarbidePanel = memo(CarbidePanel);
 const MemoFreezingPanel = memo(FreezingPanel);
 const MemoIngotMethod = memo(IngotMethod);
 const MemoIngotLegend = memo(IngotLegend);
+const MemoIngotControls = memo(IngotControls);
 
 export interface IngotSimulationProps {
   /** Initial parameters, e.g. a lesson's preset; names as in content/AUTHORING.md. */
@@ -76,12 +77,14 @@ export default function IngotSimulation({ initial, onParamsChange }: IngotSimula
   }, [sim]);
 
   // Playback state lives in refs: the animation loop mutates the frame buffers and redraws the
-  // canvas directly, and React re-renders only for the summary and the time slider (~4 Hz).
+  // canvas directly; the summary and time slider update themselves (~4 Hz) through PlaybackReadout.
   const timeRef = useRef(0);
   const frameRef = useRef<IngotFrameView | null>(null);
   const frontsRef = useRef<Fronts>({ solidusFrontM: 0, liquidusFrontM: 0, sectionSolidFraction: 0 });
-  const [shownTimeS, setShownTimeS] = useState(0);
-  const [summary, setSummary] = useState("Computing the ingot…");
+  const readoutRef = useRef<ReadoutUpdate | null>(null);
+  const registerReadout = useCallback((update: ReadoutUpdate | null) => {
+    readoutRef.current = update;
+  }, []);
   const lastSummary = useRef(0);
 
   const paint = useCallback(
@@ -94,8 +97,7 @@ export default function IngotSimulation({ initial, onParamsChange }: IngotSimula
       const now = performance.now();
       if (force || now - lastSummary.current > SUMMARY_INTERVAL_MS) {
         lastSummary.current = now;
-        setSummary(describeIngotFrame(run, frame, frontsRef.current, element));
-        setShownTimeS(frame.timeS);
+        readoutRef.current?.(describeIngotFrame(run, frame, frontsRef.current, element), frame.timeS);
       }
     },
     [run, element],
@@ -189,26 +191,14 @@ export default function IngotSimulation({ initial, onParamsChange }: IngotSimula
         formatSpeed={formatSpeed}
         disabled={!run}
       />
-      {run ? (
-        <label className="block text-sm">
-          <span className="font-semibold text-soot-800">Model time: {formatDuration(shownTimeS)}</span>
-          <span className="text-soot-600"> of {formatDuration(run.totalTimeS)}</span>
-          <input
-            type="range"
-            min={0}
-            max={run.totalTimeS}
-            step={run.totalTimeS / 400}
-            value={shownTimeS}
-            aria-valuetext={`${formatDuration(shownTimeS)} after pouring`}
-            onChange={(e) => {
-              setPlaying(false);
-              seek(Number(e.target.value));
-            }}
-            className="mt-1 block h-6 w-full cursor-pointer accent-ember-600"
-          />
-        </label>
-      ) : null}
-      <LiveSummary text={summary} />
+      <PlaybackReadout
+        register={registerReadout}
+        totalTimeS={run?.totalTimeS ?? null}
+        onSeek={(t) => {
+          setPlaying(false);
+          seek(t);
+        }}
+      />
     </>
   );
 
@@ -216,7 +206,7 @@ export default function IngotSimulation({ initial, onParamsChange }: IngotSimula
     <SimLayout
       label="Ingot freezing simulation"
       stage={stage}
-      controls={<IngotControls sim={sim} onChange={setSim} />}
+      controls={<MemoIngotControls sim={sim} onChange={setSim} />}
       footer={
         run ? (
           <>
@@ -229,12 +219,12 @@ export default function IngotSimulation({ initial, onParamsChange }: IngotSimula
               <MemoProfileChart run={run} quantity="coolingRateCPerS" />
               <MemoProfileChart run={run} quantity="armSpacingUm" />
             </div>
-            <div className="grid gap-4 @3xl:grid-cols-2">
-              <MemoCarbidePanel run={run} />
+            <div className="grid gap-4 @3xl:grid-cols-2 @3xl:items-start">
               <div className="space-y-4">
-                <MemoFreezingPanel run={run} />
+                <MemoCarbidePanel run={run} />
                 <MemoChvorinovChart sweep={sweep} run={run} />
               </div>
+              <MemoFreezingPanel run={run} />
             </div>
             <MemoIngotMethod />
           </>

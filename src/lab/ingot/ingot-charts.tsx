@@ -221,7 +221,7 @@ export function ChvorinovChart({ sweep, run }: { sweep: SweepPoint[] | null; run
   }, []);
   return (
     <ChartFigure
-      title="Freezing time against casting modulus"
+      title="Freezing time (minutes) against casting modulus"
       heightClass="h-56"
       description={
         <>
@@ -246,7 +246,7 @@ export function ChvorinovChart({ sweep, run }: { sweep: SweepPoint[] | null; run
             allowDataOverflow
             label={{ value: "modulus M = V/A", position: "insideBottom", offset: -8, fontSize: 11, fill: "#38322c" }}
           />
-          <YAxis dataKey="t" type="number" scale="log" domain={[0.1, 10000]} ticks={[0.1, 1, 10, 100, 1000, 10000]} tickFormatter={decadeLabel} tick={AXIS_TICK} width={48} unit=" min" allowDataOverflow />
+          <YAxis dataKey="t" type="number" scale="log" domain={[0.1, 10000]} ticks={[0.1, 1, 10, 100, 1000, 10000]} tickFormatter={decadeLabel} tick={AXIS_TICK} width={40} allowDataOverflow />
           <ZAxis range={[60, 60]} />
           <Scatter data={rule} line={{ stroke: "#524a43", strokeWidth: 2, strokeDasharray: "6 4" }} shape={() => <g />} isAnimationActive={false} />
           {model ? <Scatter data={model} fill="#2d6488" shape="diamond" isAnimationActive={false} /> : null}

@@ -55,7 +55,7 @@ export function SpanningChart({ curve, progress, error, crMassPct, freeCrMassPct
                 <XAxis dataKey="crMassPct" type="number" domain={[0, 30]} ticks={[0, 5, 10, 15, 20, 25, 30]} unit=" %" tick={{ fontSize: 11, fill: "#38322c" }} />
                 <YAxis domain={[0, 1]} ticks={[0, 0.25, 0.5, 0.75, 1]} tick={{ fontSize: 11, fill: "#38322c" }} width={40} />
                 <ReferenceArea x1={12} x2={13} fill="#e3c26b" fillOpacity={0.45} label={{ value: "12–13 %", position: "insideTop", fontSize: 10, fill: "#38322c" }} />
-                <ReferenceLine x={10.5} stroke="#38322c" strokeDasharray="2 3" strokeWidth={1.5} label={{ value: "10.5 %", position: "insideBottomRight", offset: 18, fontSize: 10, fill: "#38322c" }} />
+                <ReferenceLine x={10.5} stroke="#38322c" strokeDasharray="2 3" strokeWidth={1.5} label={{ value: "10.5 %", position: "insideLeft", fontSize: 10, fill: "#38322c" }} />
                 {literatureThresholdMassPct !== null ? (
                   <ReferenceLine x={literatureThresholdMassPct} stroke="#7d4f8f" strokeDasharray="7 4" strokeWidth={1.5} />
                 ) : null}
