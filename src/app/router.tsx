@@ -8,6 +8,7 @@ import type { Role } from "@shared/api/roles";
 import { meQueryOptions } from "@/api/auth";
 import { paths, routePatterns } from "@/config/paths";
 import { redirectIfSignedIn, requireUser } from "./guards";
+import { notebookRoutes } from "./notebook-routes";
 import { ProtectedOutlet } from "./layout/protected-outlet";
 import { RootLayout } from "./layout/root-layout";
 import { HydrateFallback } from "./routes/hydrate-fallback";
@@ -52,6 +53,7 @@ export function createAppRouter(queryClient: QueryClient) {
               children: [
                 { path: paths.learn, loader: homeLoader("student"), lazy: () => import("./routes/learn") },
                 ...teachRoutes(queryClient),
+                ...notebookRoutes(queryClient),
                 ...adminRoutes(queryClient, { loader: homeLoader("admin"), lazy: () => import("./routes/admin") }),
                 { path: paths.account, loader: requireUser(queryClient), lazy: () => import("./routes/account") },
                 // Lessons (features/lessons): the course outline and one lesson.

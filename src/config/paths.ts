@@ -3,6 +3,7 @@ export const paths = {
   home: "/",
   signIn: "/sign-in",
   learn: "/learn",
+  modules: "/learn/modules",
   teach: "/teach",
   admin: "/admin",
   account: "/account",
@@ -12,7 +13,7 @@ export const paths = {
   notebookNew: "/notebook/new",
   notebookEntry: (id: number) => `/notebook/${id}`,
   notebookEdit: (id: number) => `/notebook/${id}/edit`,
-  notebookReview: "/teach/notebook",
+  notebookReview: "/notebook/review",
 } as const;
 
 /** Route patterns for the router (the parameterised ones differ from the link builders). */

@@ -17,5 +17,6 @@ const HOME_LABEL: Record<Role, string> = {
 export function navItemsFor(user: PublicUser | null | undefined): NavItem[] {
   const lab: NavItem = { to: paths.lab, label: "Lab" };
   if (!user) return [lab];
-  return [{ to: ROLE_HOME[user.role], label: HOME_LABEL[user.role] }, lab, { to: paths.account, label: "Account" }];
+  const notebook: NavItem = user.role === "student" ? { to: paths.notebook, label: "Notebook" } : { to: paths.notebookReview, label: "Notebooks" };
+  return [{ to: ROLE_HOME[user.role], label: HOME_LABEL[user.role] }, { to: paths.modules, label: "Course" }, notebook, lab, { to: paths.account, label: "Account" }];
 }

@@ -35,7 +35,7 @@ export function Component() {
         {log.isPending ? <Spinner label="Loading the audit log" /> : null}
         {log.isError ? <Alert tone="danger">{messageFor(log.error)}</Alert> : null}
         {entries.length ? (
-          <div className="relative overflow-x-auto rounded-lg border border-bone-300 bg-white shadow-card">
+          <div className="relative overflow-x-auto rounded-lg border border-bone-300 bg-white shadow-card" tabIndex={0} role="region" aria-label="Audit log entries, scrolls sideways">
             <table className="w-full min-w-[44rem] text-left text-sm">
               <caption className="sr-only">Audit log entries, newest first</caption>
               <thead className="bg-bone-100 text-soot-700">

@@ -18,7 +18,7 @@ export function ProgressChart({ analytics }: { analytics: CohortAnalytics }) {
       <figcaption className="text-sm text-soot-700">{summary}</figcaption>
       <div className="mt-3 h-64" aria-hidden="true">
         <ResponsiveContainer width="100%" height="100%">
-          <ComposedChart data={points} margin={{ top: 12, right: 8, bottom: 0, left: 0 }}>
+          <ComposedChart accessibilityLayer={false} data={points} margin={{ top: 12, right: 8, bottom: 0, left: 0 }}>
             <CartesianGrid stroke={CHART.grid} vertical={false} />
             <XAxis dataKey="date" tickFormatter={(d: string) => formatShortDate(d)} tick={TICK} minTickGap={24} />
             <YAxis yAxisId="pct" domain={[0, 100]} ticks={[0, 25, 50, 75, 100]} tickFormatter={(v: number) => `${v} %`} tick={TICK} width={44} />

@@ -28,11 +28,11 @@ export function QuestionAnalytics({ quizzes }: { quizzes: QuizAnalytics[] }) {
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-end gap-4">
-        <div>
+        <div className="w-full min-w-0 sm:w-auto">
           <label htmlFor={selectId} className="block text-sm font-semibold text-soot-800">
             Quiz
           </label>
-          <select id={selectId} className={`${selectClass} mt-1.5 max-w-full`} value={quiz.quizId} onChange={(e) => setQuizId(e.target.value)}>
+          <select id={selectId} className={`${selectClass} mt-1.5 w-full sm:w-auto sm:max-w-md`} value={quiz.quizId} onChange={(e) => setQuizId(e.target.value)}>
             {quizzes.map((q) => (
               <option key={q.quizId} value={q.quizId}>
                 {q.title}
@@ -56,7 +56,7 @@ export function QuestionAnalytics({ quizzes }: { quizzes: QuizAnalytics[] }) {
           </p>
           <div className="mt-2" style={{ height: Math.max(140, data.length * 34 + 40) }} aria-hidden="true">
             <ResponsiveContainer width="100%" height="100%">
-              <BarChart data={data} layout="vertical" margin={{ top: 4, right: 24, bottom: 4, left: 0 }}>
+              <BarChart accessibilityLayer={false} data={data} layout="vertical" margin={{ top: 4, right: 24, bottom: 4, left: 0 }}>
                 <CartesianGrid stroke={CHART.grid} horizontal={false} />
                 <XAxis type="number" domain={[0, 100]} ticks={[0, 25, 50, 75, 100]} tickFormatter={(v: number) => `${v} %`} tick={TICK} />
                 <YAxis type="category" dataKey="label" width={36} tick={TICK} />
@@ -72,7 +72,7 @@ export function QuestionAnalytics({ quizzes }: { quizzes: QuizAnalytics[] }) {
         </figure>
       )}
 
-      <div className="relative overflow-x-auto">
+      <div className="relative overflow-x-auto" tabIndex={0} role="region" aria-label={`Questions of ${quiz.title}, scrolls sideways`}>
         <table className="w-full min-w-[32rem] text-left text-sm">
           <caption className="sr-only">Each question of {quiz.title}: share correct and the most common wrong answers</caption>
           <thead className="text-soot-700">

@@ -146,7 +146,7 @@ function PreviewTable({ data }: { data: RosterPreview }) {
           .join(", ")}
         .{problems ? " Rows with problems are skipped; fix them in the file and check again to include them." : ""}
       </p>
-      <div className="mt-3 max-h-96 relative overflow-auto rounded-md border border-bone-300">
+      <div className="mt-3 max-h-96 relative overflow-auto rounded-md border border-bone-300" tabIndex={0} role="region" aria-label="Roster rows, scrollable">
         <table className="w-full min-w-[36rem] text-left text-sm">
           <caption className="sr-only">Every row of the roster and what the import will do with it</caption>
           <thead className="sticky top-0 z-10 bg-bone-100 text-soot-700 shadow-[0_1px_0_var(--color-bone-300)]">

@@ -41,6 +41,8 @@ import { CarbideWorker } from "./worker-client";
 export interface CarbideSimulationProps {
   /** Initial parameters, e.g. a lesson's preset; names as in content/AUTHORING.md. */
   initial?: Record<string, unknown>;
+  /** Called with the current settings whenever they change (a lesson's simulation task submits them). */
+  onParamsChange?: (params: Record<string, unknown>) => void;
 }
 
 function resolveInitial(initial: Record<string, unknown> | undefined): { params: CarbideParams; error: string | null } {
@@ -53,9 +55,14 @@ const STONE_NAME: Record<StoneId, string> = { alumina: "aluminium oxide", "silic
 const SPEEDS = [0.25, 1, 4] as const;
 const UI_INTERVAL_MS = 250;
 
-export default function CarbideSimulation({ initial }: CarbideSimulationProps) {
+export default function CarbideSimulation({ initial, onParamsChange }: CarbideSimulationProps) {
   const [{ params: start, error: presetError }] = useState(() => resolveInitial(initial));
   const [params, setParams] = useState<CarbideParams>(start);
+  const onParamsChangeRef = useRef(onParamsChange);
+  onParamsChangeRef.current = onParamsChange;
+  useEffect(() => {
+    onParamsChangeRef.current?.(params as unknown as Record<string, unknown>);
+  }, [params]);
   const [hours, setHoursValue] = useState(start.coarseningHours);
   const reducedMotion = usePrefersReducedMotion();
   const [playing, setPlaying] = useState(false);

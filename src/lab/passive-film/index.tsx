@@ -38,6 +38,8 @@ import { useSurfaceModel } from "./use-surface-model";
 export interface PassiveFilmSimulationProps {
   /** Initial parameters, e.g. a lesson's preset; names as in content/AUTHORING.md. */
   initial?: Record<string, unknown>;
+  /** Called with the current settings whenever they change (a lesson's simulation task submits them). */
+  onParamsChange?: (params: Record<string, unknown>) => void;
 }
 
 /** Lesson preset (if any), else the page's URL search parameters, validated by the simulation's schema. */
@@ -50,9 +52,14 @@ function resolveInitial(initial: Record<string, unknown> | undefined): { params:
 const MemoSurfaceCanvas = memo(SurfaceCanvas);
 const SUMMARY_INTERVAL_MS = 250;
 
-export default function PassiveFilmSimulation({ initial }: PassiveFilmSimulationProps) {
+export default function PassiveFilmSimulation({ initial, onParamsChange }: PassiveFilmSimulationProps) {
   const [{ params: startParams, error: presetError }] = useState(() => resolveInitial(initial));
   const [params, setParams] = useState(startParams);
+  const onParamsChangeRef = useRef(onParamsChange);
+  onParamsChangeRef.current = onParamsChange;
+  useEffect(() => {
+    onParamsChangeRef.current?.(params as unknown as Record<string, unknown>);
+  }, [params]);
   const reducedMotion = usePrefersReducedMotion();
   const [playing, setPlaying] = useState(() => !(typeof window !== "undefined" && window.matchMedia?.("(prefers-reduced-motion: reduce)").matches));
   const [speed, setSpeed] = useState(4);
