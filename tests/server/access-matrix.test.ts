@@ -36,8 +36,12 @@ interface Row {
   setup?: (actor: Actor) => Promise<Cell>;
 }
 
-/** Role-restricted routes owned by other parts of the product, tested with them. */
-const NOT_IN_THIS_MATRIX = new Set(["POST /api/alloys/:id/attach"]);
+/**
+ * Role-restricted routes whose objects belong to other features (a saved alloy, a notebook entry);
+ * their object-level rules are tested with those features. Any OTHER new role-restricted route
+ * must be added to ROWS, or the first test fails.
+ */
+const NOT_IN_THIS_MATRIX = new Set(["POST /api/alloys/:id/attach", "POST /api/notebook/entries/:id/review"]);
 
 let w: TeachingWorld;
 const agents = {} as Record<Actor, { agent: Agent; csrfToken: string }>;
@@ -161,6 +165,8 @@ const ROWS: Row[] = [
   },
   { method: "POST", path: "/api/admin/jobs/run", scope: "admin", ok: 200 },
   { method: "GET", path: "/api/audit-log", scope: "admin", ok: 200 },
+  // The notebook review queue: staff only; each instructor sees their own students' entries.
+  { method: "GET", path: "/api/notebook/review", scope: "staff", ok: 200 },
 ];
 
 function expected(row: Row, actor: Actor): number {

@@ -211,6 +211,23 @@ describe("bad uploads are refused and leave nothing behind", () => {
       .set("Content-Type", "multipart/form-data; boundary=XyZ")
       .send('--XyZ\r\nContent-Disposition: form-data; name="file"; filename="a.png"\r\nContent-Type: image/png\r\n\r\n\x89PNG trunc');
     await expectRejected(malformed, 400, "malformed_upload", before);
+    // Regression seeds (reliability guide §5(c)): the shapes of multer#1338 (empty file name, cut-off
+    // closing boundary) and juice-shop#3641 (part header straight into the closing boundary).
+    const raw = (boundary: string, body: string) =>
+      w.s1.agent
+        .post(`/api/notebook/entries/${entryId}/files`)
+        .set("x-csrf-token", w.s1.csrfToken)
+        .set("Content-Type", `multipart/form-data; boundary=${boundary}`)
+        .send(body);
+    for (const r of [
+      await raw("----FormBoundary", '------FormBoundary\r\nContent-Disposition: form-data; name="file"; filename=""\r\nContent-Type: application/octet-stream\r\n\r\n\r\n------FormBoundar'),
+      await raw("----geckoformboundary", '------geckoformboundary\r\nContent-Disposition: form-data; name="file"; filename="a.png"\r\nContent-Type: image/png\r\n\r\n------geckoformboundary--\r\n'),
+    ]) {
+      expect(r.status, JSON.stringify(r.body)).toBe(400);
+      expect(["malformed_upload", "file_missing", "empty_file", "unsupported_file_type"]).toContain(r.body.error.code);
+    }
+    expect(await fileRows()).toBe(before.rows);
+    expect(listUploads()).toEqual(before.files);
     await expectRejected(w.s1.agent.post(`/api/notebook/entries/${entryId}/files`).set("x-csrf-token", w.s1.csrfToken).send({ file: "x" }), 400, "file_missing", before);
     const noToken = w.s1.agent.post(`/api/notebook/entries/${entryId}/files`).attach("file", await photo(), "a.png");
     await expectRejected(noToken, 403, "csrf_failed", before);

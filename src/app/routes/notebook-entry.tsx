@@ -15,5 +15,5 @@ export function Component() {
       </PageBody>
     );
   }
-  return <EntryPage key={id} id={id} renderReview={(entry) => <ReviewPanel key={entry.comments.length} entry={entry} />} />;
+  return <EntryPage key={id} id={id} renderReview={(entry) => <ReviewPanel entry={entry} />} />;
 }

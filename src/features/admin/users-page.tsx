@@ -176,7 +176,7 @@ function UserRow({ user, onNotice }: { user: AdminUser; onNotice: (text: string)
 
   return (
     <tr className={cx(user.disabled && "bg-bone-50 text-soot-600")}>
-      <th scope="row" className="px-4 py-3 font-normal">
+      <th scope="row" className="min-w-48 px-4 py-3 font-normal">
         <span className="block font-semibold text-soot-900">
           {user.displayName}
           {self ? <span className="ml-2 text-xs font-normal text-soot-600">(you)</span> : null}

@@ -125,10 +125,10 @@ export function ComputedPanel({ computation, coldTreatment, headingId = "compute
         </ul>
       ) : null}
 
-      <h3 className="mt-5 font-sans text-sm font-semibold uppercase tracking-wide text-soot-600">Your readings</h3>
+      <h3 className="mt-5 font-sans text-sm font-semibold uppercase tracking-wide text-soot-600">Readings</h3>
       <dl className="mt-1">
         <Row
-          label="Mean of your readings"
+          label="Mean reading"
           value={readings.meanHrc !== null ? formatHrc(readings.meanHrc) : "—"}
           emphasis
           detail={readings.count > 0 ? `${readings.count} reading${readings.count === 1 ? "" : "s"}, ${readings.minHrc!.toFixed(1)}–${readings.maxHrc!.toFixed(1)} HRC.` : "No readings yet."}

@@ -334,7 +334,7 @@ export function EntryForm({ entryId, defaults, currentSteel }: { entryId?: numbe
         </div>
       </form>
 
-      <div className="space-y-6 lg:sticky lg:top-6">
+      <div className="space-y-6">
         {estimate ? (
           <ComputedPanel computation={estimate} coldTreatment={values.coldTreatment} headingId="preview-heading" preview />
         ) : (

@@ -13,12 +13,10 @@ function StorageMeter({ storage }: { storage: StorageUsage }) {
   const share = Math.min(1, storage.usedBytes / storage.quotaBytes);
   return (
     <div className="rounded-lg border border-bone-300 bg-white p-4 shadow-card">
-      <div className="flex items-baseline justify-between gap-3 text-sm">
-        <span className="font-semibold text-soot-800">Photo and report storage</span>
-        <span className="font-mono tabular-nums text-soot-700">
-          {formatBytes(storage.usedBytes)} of {formatBytes(storage.quotaBytes)}
-        </span>
-      </div>
+      <p className="text-sm font-semibold text-soot-800">Photo and report storage</p>
+      <p className="mt-0.5 font-mono text-sm tabular-nums text-soot-700">
+        {formatBytes(storage.usedBytes)} of {formatBytes(storage.quotaBytes)} used
+      </p>
       <div
         role="meter"
         aria-label="Storage used"
