@@ -169,6 +169,9 @@ describe("lesson and quiz, as the demo student", () => {
         await fontsReady(page);
         await page.evaluate(() => window.scrollTo(0, 0));
         await screenshot(page, `lesson-${viewport.width}`);
+        // Nothing in the lesson (inline formulas, glossary pop-ups) may widen the page sideways.
+        const overflowPx = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+        expect(overflowPx).toBeLessThanOrEqual(0);
 
         // The quiz result (stored by the first test) as the student sees it after coming back.
         const panel = page.locator(".quiz-panel");
