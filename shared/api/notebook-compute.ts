@@ -6,7 +6,7 @@
  *   tempering   temperingParameter (Hollomon–Jaffe, C = 20, hours) and temperingConstantForCarbon;
  *               equivalentTemperingHours for "the same temper at another temperature".
  *   hardening   dissolvedFractionsForAustenitizing -> hardenedState (carbon and alloy in solution)
- *               -> martensiteHardnessHrcWithWarnings (as-quenched estimate), andrewsMsWithWarnings (Ms)
+ *               -> martensitePlateauHardnessHrc (as-quenched estimate), andrewsMsWithWarnings (Ms)
  *               -> retainedAusteniteFraction at room temperature and after the cold treatment.
  *
  * Where a model's input range is exceeded the value is null and `unavailable` says why.
@@ -17,7 +17,7 @@ import {
   equivalentTemperingHours,
   hardenedState,
   HOLLOMON_JAFFE_CONSTANT,
-  martensiteHardnessHrcWithWarnings,
+  martensitePlateauHardnessHrc,
   retainedAusteniteFraction,
   temperingConstantForCarbon,
   temperingParameter,
@@ -154,7 +154,7 @@ export function computeHardening(input: Pick<NotebookComputeInput, "composition"
     return out;
   }
   try {
-    const hrc = martensiteHardnessHrcWithWarnings(out.carbonInSolutionMassPct!);
+    const hrc = martensitePlateauHardnessHrc(out.carbonInSolutionMassPct!);
     out.asQuenchedHrc = hrc.value;
     out.warnings.push(...hrc.warnings);
   } catch (err) {

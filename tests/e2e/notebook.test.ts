@@ -13,7 +13,7 @@ import {
   dissolvedFractionsForAustenitizing,
   findGrade,
   hardenedState,
-  martensiteHardnessHrc,
+  martensitePlateauHardnessHrc,
   retainedAusteniteFraction,
   temperingParameter,
 } from "../../shared/metallurgy";
@@ -157,7 +157,7 @@ describe("forge notebook", () => {
     const state = hardenedState(comp, { dissolvedFraction: dissolvedFractionsForAustenitizing(comp, 845).dissolvedFraction });
     const ms = andrewsMsC(state.solution.composition);
     expect(await dd(page, "Tempering parameter P").textContent()).toBe(pText);
-    expect(await dd(page, "As-quenched hardness estimate").first().textContent()).toBe(`${martensiteHardnessHrc(state.solution.carbonMassPct).toFixed(1)} HRC`);
+    expect(await dd(page, "As-quenched hardness estimate").first().textContent()).toBe(`${martensitePlateauHardnessHrc(state.solution.carbonMassPct).value.toFixed(1)} HRC`);
     expect(await dd(page, "Martensite start, Ms").first().textContent()).toBe(`${Math.round(ms)} °C`);
     const ra = retainedAusteniteFraction(ms, 20);
     expect(await dd(page, "Retained austenite at 20 °C").first().textContent()).toBe(`${(ra * 100).toFixed(ra < 0.1 ? 1 : 0)} %`);

@@ -16,7 +16,7 @@ import {
   equivalentTemperingHours,
   findGrade,
   hardenedState,
-  martensiteHardnessHrc,
+  martensitePlateauHardnessHrc,
   retainedAusteniteFraction,
   temperingConstantForCarbon,
   temperingParameter,
@@ -97,7 +97,7 @@ describe("creating entries", () => {
     const state = hardenedState(comp, { dissolvedFraction: dissolved.dissolvedFraction });
     const ms = andrewsMsC(state.solution.composition);
     expect(c.hardening.carbonInSolutionMassPct).toBe(state.solution.carbonMassPct);
-    expect(c.hardening.asQuenchedHrc).toBe(martensiteHardnessHrc(state.solution.carbonMassPct));
+    expect(c.hardening.asQuenchedHrc).toBe(martensitePlateauHardnessHrc(state.solution.carbonMassPct).value);
     expect(c.hardening.msC).toBe(ms);
     expect(c.hardening.retainedAusteniteAtRoom).toBe(retainedAusteniteFraction(ms, 20));
     // Dry ice is taken as −78 °C (sublimation of CO2 at 1 atm is −78.5 °C [Checked, handbook value]).

@@ -24,6 +24,27 @@ export function martensiteHardnessHrcWithWarnings(carbonMassPct: number): WithWa
   return { value, warnings };
 }
 
+/** Carbon above which as-quenched hardness is held constant by martensitePlateauHardnessHrc, mass %. */
+export const MARTENSITE_PLATEAU_CARBON_MASS_PCT = 0.7;
+
+/**
+ * As-quenched hardness for any carbon in solution (0–2.11 %): the A255 polynomial up to 0.7 % C, held at its
+ * 0.7 % value above. Measured as-quenched hardness levels off near 0.6–0.8 % C as retained austenite grows
+ * (Krauss 1999, Mater. Sci. Eng. A 273–275, 40) [Pub, mem]; the polynomial itself turns down above 0.7 % and
+ * would report a fully hardened 1 % C steel at about 51 HRC. Use this for high-carbon blade steels.
+ */
+export function martensitePlateauHardnessHrc(carbonMassPct: number): WithWarnings<number> {
+  const c = requireInRange("carbonMassPct", carbonMassPct, { min: 0, max: 2.11 });
+  if (c <= MARTENSITE_PLATEAU_CARBON_MASS_PCT) return martensiteHardnessHrcWithWarnings(c);
+  const plateau = martensiteHardnessHrcWithWarnings(MARTENSITE_PLATEAU_CARBON_MASS_PCT).value;
+  return {
+    value: plateau,
+    warnings: [
+      `${c.toFixed(2)} % C in solution is above ${MARTENSITE_PLATEAU_CARBON_MASS_PCT} %: hardness is held at the ${MARTENSITE_PLATEAU_CARBON_MASS_PCT} % value, because real as-quenched hardness levels off there while retained austenite grows.`,
+    ],
+  };
+}
+
 /**
  * Martensite hardness (HV) from composition and cooling rate at 700 °C (°C/h), Maynier, Jungmann & Dollet
  * (1978): HV = 127 + 949C + 27Si + 11Mn + 8Ni + 16Cr + 21·log10(V_r) [Checked, several independent

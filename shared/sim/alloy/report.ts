@@ -14,7 +14,7 @@ import { hardenedState, type HardenedState } from "../../metallurgy/carbides/har
 import { dissolvedFractionsForAustenitizing } from "../../metallurgy/carbides/austenitizing-dissolution";
 import { edgeRetentionIndex, sharpeningEffortIndex, wearPhasesFromCarbides } from "../../metallurgy/carbides/wear-index";
 import type { CarbideType } from "../../metallurgy/carbides/carbide-data";
-import { martensiteHardnessHrcWithWarnings } from "../../metallurgy/hardening/martensite-hardness";
+import { martensitePlateauHardnessHrc } from "../../metallurgy/hardening/martensite-hardness";
 import { hrcToHv } from "../../metallurgy/hardening/hardness-conversion";
 import { andrewsMsWithWarnings, retainedAusteniteFraction } from "../../metallurgy/hardening/martensite-start";
 import { liquidusTempC, solidusTempC } from "../../metallurgy/solidification/liquidus-solidus";
@@ -82,8 +82,8 @@ export const FIGURE_INFO: Record<FigureId, FigureInfo> = {
   },
   hardness: {
     title: "As-quenched hardness (martensite)",
-    method: "Hardness of fully martensitic steel from the carbon dissolved in austenite at the hardening temperature (the ASTM A255 initial-hardness polynomial). Retained austenite and undissolved carbides are not in this number.",
-    source: "ASTM A255 initial-hardness polynomial (calibrated 0.1–0.7 % C).",
+    method: "Hardness of fully martensitic steel from the carbon dissolved in austenite at the hardening temperature (the ASTM A255 initial-hardness polynomial, held at its 0.7 % C value above 0.7 % C, where measured hardness levels off). Retained austenite and undissolved carbides are not in this number.",
+    source: "ASTM A255 initial-hardness polynomial (calibrated 0.1–0.7 % C); plateau above 0.7 % C after Krauss (1999).",
   },
   "ms-retained-austenite": {
     title: "Martensite start and retained austenite",
@@ -224,7 +224,7 @@ export function alloyReport(alloy: ResolvedAlloy, options: AlloyReportOptions): 
   });
   figures.hardness = guard("hardness", error, () => {
     const carbon = hardened!.solution.carbonMassPct;
-    const h = martensiteHardnessHrcWithWarnings(carbon);
+    const h = martensitePlateauHardnessHrc(carbon);
     numbers.hardnessHrc = h.value;
     return { value: `${formatNumber(h.value, 3)} HRC`, details: [`${formatMassPct(carbon)} C in solution at ${tempC} °C`, `≈ ${Math.round(hrcToHv(Math.min(68, Math.max(20, h.value))))} HV`], warnings: h.warnings };
   });
@@ -242,7 +242,7 @@ export function alloyReport(alloy: ResolvedAlloy, options: AlloyReportOptions): 
     };
   });
   figures["wear-indices"] = guard("wear-indices", error, () => {
-    const hrc = martensiteHardnessHrcWithWarnings(hardened!.solution.carbonMassPct).value;
+    const hrc = martensitePlateauHardnessHrc(hardened!.solution.carbonMassPct).value;
     const matrixHv = hrcToHv(Math.min(68, Math.max(20, hrc)));
     const phases = wearPhasesFromCarbides(hardened!, matrixHv);
     const eri = edgeRetentionIndex(phases);

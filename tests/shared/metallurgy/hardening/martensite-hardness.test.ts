@@ -4,6 +4,7 @@ import { InputError } from "@shared/metallurgy/errors";
 import {
   martensiteHardnessHrc,
   martensiteHardnessHrcWithWarnings,
+  martensitePlateauHardnessHrc,
   maynierHardnessHv,
   maynierHardnessHvWithWarnings,
 } from "@shared/metallurgy/hardening";
@@ -65,5 +66,22 @@ describe("maynierHardnessHv (Maynier, Jungmann & Dollet 1978)", () => {
     expect(() => maynierHardnessHv({ C: 0.4 }, 0)).toThrow(InputError);
     expect(() => maynierHardnessHv({ C: 0.4 }, -5)).toThrow(InputError);
     expect(() => maynierHardnessHv({ C: -0.4 }, 3600)).toThrow(InputError);
+  });
+});
+
+describe("martensitePlateauHardnessHrc", () => {
+  it("follows the A255 polynomial up to 0.7 % C", () => {
+    // [Computed] science-reference §2.3 check 1: A255 at 0.4 % C = 56.30 HRC
+    within(martensitePlateauHardnessHrc(0.4).value, 56.3, 0.02);
+    expect(martensitePlateauHardnessHrc(0.4).value).toBe(martensiteHardnessHrc(0.4));
+  });
+
+  it("holds the 0.7 % value above 0.7 % C, with a warning, where the polynomial turns down", () => {
+    // [Computed] science-reference §2.3 check 1: A255 at 0.7 % C = 65.78 HRC; plateau per Krauss (1999) [Pub, mem]
+    const high = martensitePlateauHardnessHrc(1.0);
+    within(high.value, 65.78, 0.02);
+    expect(martensiteHardnessHrc(1.0)).toBeLessThan(55); // the raw polynomial would report ~51 HRC
+    expect(high.warnings.join(" ")).toMatch(/held at the 0.7 % value/);
+    expect(() => martensitePlateauHardnessHrc(2.5)).toThrow(InputError);
   });
 });
