@@ -46,6 +46,7 @@ export const ROUTE_POLICY: readonly RoutePolicy[] = [
   { method: "PATCH", path: "/api/alloys/:id", access: "authenticated", object: "owner only (loadOwned, else 404)" },
   { method: "DELETE", path: "/api/alloys/:id", access: "authenticated", object: "owner only (loadOwned, else 404)" },
   { method: "POST", path: "/api/alloys/:id/attach", access: ["instructor", "admin"], object: "owner of the alloy only (loadOwned, else 404)" },
+  { method: "DELETE", path: "/api/alloys/:id/attach/:slug", access: ["instructor", "admin"], object: "owner of the alloy only (loadOwned, else 404)" },
   { method: "GET", path: "/api/lessons/:slug/attached-alloys", access: "authenticated" },
   { method: "GET", path: "/api/cohorts", access: ["instructor", "admin"], object: "own cohorts (instructor) or all (admin)" },
   { method: "POST", path: "/api/cohorts", access: ["instructor", "admin"], object: "instructorId: admins only (else 403)" },

@@ -4,6 +4,7 @@ import {
   alloyIdParamSchema,
   attachAlloyRequestSchema,
   createSavedAlloyRequestSchema,
+  detachAlloyParamsSchema,
   MAX_SAVED_ALLOYS_PER_USER,
   renameSavedAlloyRequestSchema,
   type AlloyComposition,
@@ -27,7 +28,8 @@ function toSavedAlloy(row: SavedAlloyInstance): SavedAlloy {
   return { id: row.id, name: row.name, composition: row.composition as AlloyComposition, createdAt: iso(row.createdAt), updatedAt: iso(row.updatedAt) };
 }
 
-function toAttachedAlloy(row: LessonAlloyInstance): AttachedAlloy {
+/** `yours`: the viewer owns the attached alloy, so the lesson page may offer to remove it. */
+function toAttachedAlloy(row: LessonAlloyInstance, viewerId: number): AttachedAlloy {
   return {
     id: row.id,
     lessonSlug: row.lessonSlug,
@@ -36,6 +38,7 @@ function toAttachedAlloy(row: LessonAlloyInstance): AttachedAlloy {
     name: row.alloy?.name ?? "",
     composition: (row.alloy?.composition ?? {}) as AlloyComposition,
     attachedBy: row.attachedBy?.displayName ?? "",
+    yours: row.alloy?.userId === viewerId,
     createdAt: iso(row.createdAt),
   };
 }
@@ -111,7 +114,22 @@ export function createAlloysRouter(ctx: AppContext): Router {
         return [await LessonAlloy.create({ alloyId: alloy.id, lessonSlug, note, attachedById }, { transaction }), true] as const;
       });
       const full = await ctx.db.read(() => loadAttachment(ctx, row.id));
-      res.status(created ? 201 : 200).json({ attachment: toAttachedAlloy(full!) });
+      res.status(created ? 201 : 200).json({ attachment: toAttachedAlloy(full!, attachedById) });
+    },
+  );
+
+  // Detaching is the owner's call, like attaching; the alloy itself stays saved.
+  router.delete(
+    "/:id/attach/:slug",
+    requireRole("instructor", "admin"),
+    validate({ params: detachAlloyParamsSchema }),
+    ownAlloy,
+    async (req, res) => {
+      const alloy = owned<SavedAlloyInstance>(res, "alloy");
+      const lessonSlug = (req.params as unknown as { slug: string }).slug;
+      const removed = await ctx.db.write((transaction) => LessonAlloy.destroy({ where: { alloyId: alloy.id, lessonSlug }, transaction }));
+      if (removed === 0) throw notFound("That attachment");
+      res.status(204).end();
     },
   );
 
@@ -123,6 +141,7 @@ export function createLessonAlloysRouter(ctx: AppContext): Router {
   const router = Router();
   router.get("/:slug/attached-alloys", requireAuth, validate({ params: lessonParamsSchema }), async (req, res) => {
     const slug = (req.params as { slug: string }).slug;
+    const viewerId = currentUser(req).id;
     const rows = await ctx.db.read(() =>
       ctx.db.models.LessonAlloy.findAll({
         where: { lessonSlug: slug },
@@ -130,14 +149,14 @@ export function createLessonAlloysRouter(ctx: AppContext): Router {
         order: [["createdAt", "ASC"], ["id", "ASC"]],
       }),
     );
-    res.json({ attachments: rows.map(toAttachedAlloy) });
+    res.json({ attachments: rows.map((row) => toAttachedAlloy(row, viewerId)) });
   });
   return router;
 }
 
 function attachmentIncludes(ctx: AppContext) {
   return [
-    { model: ctx.db.models.SavedAlloy, as: "alloy", attributes: ["name", "composition"] },
+    { model: ctx.db.models.SavedAlloy, as: "alloy", attributes: ["name", "composition", "userId"] },
     { model: ctx.db.models.User, as: "attachedBy", attributes: ["displayName"] },
   ];
 }

@@ -48,6 +48,11 @@ export const attachAlloyRequestSchema = z.strictObject({
 });
 export type AttachAlloyRequest = z.input<typeof attachAlloyRequestSchema>;
 
+export const detachAlloyParamsSchema = z.strictObject({
+  id: alloyIdParamSchema.shape.id,
+  slug: lessonSlugSchema,
+});
+
 export const savedAlloySchema = z.object({
   id: z.number().int(),
   name: z.string(),
@@ -73,6 +78,8 @@ export const attachedAlloySchema = z.object({
   name: z.string(),
   composition: alloyCompositionSchema,
   attachedBy: z.string(),
+  /** The viewer owns the alloy (and so may detach it). */
+  yours: z.boolean(),
   createdAt: z.string(),
 });
 export type AttachedAlloy = z.infer<typeof attachedAlloySchema>;

@@ -61,6 +61,15 @@ export function useAttachAlloy() {
   });
 }
 
+export function useDetachAlloy() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ alloyId, lessonSlug }: { alloyId: number; lessonSlug: string }) =>
+      api.delete<void>(`/api/alloys/${alloyId}/attach/${encodeURIComponent(lessonSlug)}`),
+    onSuccess: (_void, { lessonSlug }) => queryClient.invalidateQueries({ queryKey: alloyQueryKeys.attached(lessonSlug) }),
+  });
+}
+
 export const attachedAlloysQueryOptions = (lessonSlug: string) =>
   queryOptions({
     queryKey: alloyQueryKeys.attached(lessonSlug),

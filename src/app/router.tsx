@@ -57,8 +57,8 @@ export function createAppRouter(queryClient: QueryClient) {
                 ...adminRoutes(queryClient, { loader: homeLoader("admin"), lazy: () => import("./routes/admin") }),
                 { path: paths.account, loader: requireUser(queryClient), lazy: () => import("./routes/account") },
                 // Lessons (features/lessons): the course outline and one lesson.
-                { path: "/learn/modules", loader: requireUser(queryClient), lazy: () => import("@/features/lessons/modules-page") },
-                { path: "/learn/:moduleSlug/:lessonSlug", loader: requireUser(queryClient), lazy: () => import("@/features/lessons/lesson-page") },
+                { path: paths.modules, loader: requireUser(queryClient), lazy: () => import("@/features/lessons/modules-page") },
+                { path: routePatterns.lesson, loader: requireUser(queryClient), lazy: () => import("@/features/lessons/lesson-page") },
               ],
             },
             { path: "*", Component: NotFoundPage },

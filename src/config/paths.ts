@@ -4,6 +4,7 @@ export const paths = {
   signIn: "/sign-in",
   learn: "/learn",
   modules: "/learn/modules",
+  lesson: (moduleSlug: string, lessonSlug: string) => `/learn/${encodeURIComponent(moduleSlug)}/${encodeURIComponent(lessonSlug)}`,
   teach: "/teach",
   admin: "/admin",
   account: "/account",
@@ -19,6 +20,7 @@ export const paths = {
 /** Route patterns for the router (the parameterised ones differ from the link builders). */
 export const routePatterns = {
   labSimulation: "/lab/:simId",
+  lesson: "/learn/:moduleSlug/:lessonSlug",
   notebookEntry: "/notebook/:entryId",
   notebookEdit: "/notebook/:entryId/edit",
 } as const;

@@ -137,6 +137,36 @@ describe("attaching a saved alloy to a lesson", () => {
     expect(((await student.agent.get("/api/lessons/first-lesson/attached-alloys")).body as AttachedAlloyListResponse).attachments).toEqual([]);
   });
 
+  it("lets only the owner detach an alloy from a lesson; the alloy itself stays saved", async () => {
+    const instructor = await newInstructor();
+    const alloy = await save(instructor, "Detach me", { C: 1.2, Cr: 12 });
+    expect((await post(instructor, `/api/alloys/${alloy.id}/attach`, { lessonSlug: "first-lesson", note: "" })).status).toBe(201);
+    expect((await post(instructor, `/api/alloys/${alloy.id}/attach`, { lessonSlug: "second-lesson", note: "" })).status).toBe(201);
+
+    // The owner sees the attachment as theirs; a student does not.
+    const student = await newStudent(t, "detach-reader");
+    const ownView = (await instructor.agent.get("/api/lessons/first-lesson/attached-alloys")).body as AttachedAlloyListResponse;
+    expect(ownView.attachments.find((a) => a.alloyId === alloy.id)?.yours).toBe(true);
+    const studentView = (await student.agent.get("/api/lessons/first-lesson/attached-alloys")).body as AttachedAlloyListResponse;
+    expect(studentView.attachments.find((a) => a.alloyId === alloy.id)?.yours).toBe(false);
+
+    // A student gets 403, another instructor 404 (someone else's alloy), and nothing changes.
+    expect((await del(student, `/api/alloys/${alloy.id}/attach/first-lesson`)).status).toBe(403);
+    expect((await del(await newInstructor(), `/api/alloys/${alloy.id}/attach/first-lesson`)).status).toBe(404);
+    expect(((await student.agent.get("/api/lessons/first-lesson/attached-alloys")).body as AttachedAlloyListResponse).attachments.some((a) => a.alloyId === alloy.id)).toBe(true);
+
+    expect((await del(instructor, `/api/alloys/${alloy.id}/attach/first-lesson`)).status).toBe(204);
+    expect(((await student.agent.get("/api/lessons/first-lesson/attached-alloys")).body as AttachedAlloyListResponse).attachments.some((a) => a.alloyId === alloy.id)).toBe(false);
+    // Only that lesson's attachment went; the other lesson and the saved alloy remain.
+    expect(((await student.agent.get("/api/lessons/second-lesson/attached-alloys")).body as AttachedAlloyListResponse).attachments.some((a) => a.alloyId === alloy.id)).toBe(true);
+    expect(((await instructor.agent.get("/api/alloys")).body as SavedAlloyListResponse).alloys.some((a) => a.id === alloy.id)).toBe(true);
+    // Detaching again: nothing to remove.
+    const twice = await del(instructor, `/api/alloys/${alloy.id}/attach/first-lesson`);
+    expect(twice.status).toBe(404);
+    expect(twice.body.error.message).toMatch(/attachment/i);
+    expect((await del(instructor, `/api/alloys/${alloy.id}/attach/Bad%20Slug`)).status).toBe(400);
+  });
+
   it("rejects unknown lessons (404) and malformed slugs or notes (400)", async () => {
     const instructor = await newInstructor();
     const alloy = await save(instructor, "Plain", { C: 0.95 });

@@ -1,4 +1,5 @@
 /** Number and duration formatting shared by the ingot, powder and alloy simulations' text. */
+import { ALLOY_ELEMENTS } from "./params";
 
 /** A model duration in words: "42 s", "12 min 30 s", "3 h 05 min", "2.1 ms". */
 export function formatDuration(seconds: number): string {
@@ -49,4 +50,10 @@ export function formatMassPct(value: number): string {
   if (!Number.isFinite(value)) return "—";
   const decimals = value < 1 ? 2 : value < 10 ? 2 : 1;
   return `${value.toFixed(decimals)} %`;
+}
+
+/** "1.05 C, 14 Cr, 4 Mo": the elements present, in the explorer's order; "pure iron" when none. */
+export function compositionText(composition: Partial<Record<(typeof ALLOY_ELEMENTS)[number], number>>): string {
+  const parts = ALLOY_ELEMENTS.filter((el) => (composition[el] ?? 0) > 0).map((el) => `${composition[el]} ${el}`);
+  return parts.length ? parts.join(", ") : "pure iron";
 }

@@ -49,6 +49,13 @@ export function encodeAlloyParams(params: AlloyParams): string {
   return search.toString();
 }
 
+/** The query of an explorer link that opens these alloys (the first MAX_ALLOYS) at default settings. */
+export function alloyLinkQuery(specs: readonly AlloySpec[]): string {
+  const search = new URLSearchParams();
+  for (const spec of specs.slice(0, MAX_ALLOYS)) search.append(ALLOY_KEY, encodeAlloySpec(spec));
+  return search.toString();
+}
+
 export interface DecodedAlloyState {
   /** Null when the URL holds no alloy state at all (use the embedding preset or defaults). */
   params: AlloyParams | null;

@@ -13,12 +13,13 @@ import { Spinner } from "@/components/ui/spinner";
 import { mdxComponents } from "@/components/mdx/components";
 import { LessonContextProvider, type LessonContextValue } from "@/components/mdx/lesson-context";
 import { useFocusableOverflow } from "@/components/mdx/use-focusable-overflow";
+import { AttachedAlloys } from "./attached-alloys";
 import { findLesson } from "./course-outline";
-import { lessonPaths } from "./lesson-paths";
 import { useLessonModule, type LessonModule } from "./lesson-modules";
 import { TableOfContents } from "./table-of-contents";
 import { useLessonProgressSaver } from "./use-lesson-progress-saver";
 import { useSectionTracking } from "./use-section-tracking";
+import { paths } from "@/config/paths";
 
 const QuizPanel = lazy(() => import("@/features/quiz/quiz-panel"));
 
@@ -34,7 +35,7 @@ export function Component() {
       <div className="mx-auto max-w-page px-gutter py-12">
         <Alert tone="danger" title="This lesson could not be opened">
           {modules.data && !position ? "There is no such lesson in the course." : "Check your connection and reload the page."}{" "}
-          <Link to={lessonPaths.modules} className="underline">
+          <Link to={paths.modules} className="underline">
             All modules
           </Link>
         </Alert>
@@ -120,13 +121,13 @@ function LessonView({ position, Content, savedChecks, savedSections, lastSection
           <nav aria-label="Breadcrumb" className="print-hide text-sm">
             <ol className="flex flex-wrap items-center gap-x-2 gap-y-1 text-ash-300">
               <li>
-                <Link to={lessonPaths.modules} className="underline-offset-4 hover:text-ember-200 hover:underline">
+                <Link to={paths.modules} className="underline-offset-4 hover:text-ember-200 hover:underline">
                   Modules
                 </Link>
               </li>
               <li aria-hidden="true">/</li>
               <li>
-                <Link to={`${lessonPaths.modules}#module-${module.slug}`} className="underline-offset-4 hover:text-ember-200 hover:underline">
+                <Link to={`${paths.modules}#module-${module.slug}`} className="underline-offset-4 hover:text-ember-200 hover:underline">
                   {module.title}
                 </Link>
               </li>
@@ -187,6 +188,7 @@ function LessonView({ position, Content, savedChecks, savedSections, lastSection
               </details>
 
               <Objectives lesson={lesson} />
+              <AttachedAlloys lessonSlug={lesson.slug} />
 
               <LessonContextProvider value={context}>
                 <article ref={article} className="lesson-prose prose">
@@ -234,7 +236,7 @@ function PreviousNext({ previous, next }: { previous: LessonOutline | null; next
   return (
     <nav aria-label="Previous and next lesson" className="print-hide mt-14 grid gap-4 border-t border-bone-300 pt-8 sm:grid-cols-2">
       {previous ? (
-        <Link to={lessonPaths.lesson(previous.moduleSlug, previous.slug)} className="group rounded-lg border border-bone-300 bg-white p-4 hover:border-quench-500">
+        <Link to={paths.lesson(previous.moduleSlug, previous.slug)} className="group rounded-lg border border-bone-300 bg-white p-4 hover:border-quench-500">
           <span className="eyebrow text-soot-600">← Previous</span>
           <span className="mt-1 block font-display text-lg font-semibold text-soot-900 group-hover:text-quench-700">{previous.title}</span>
         </Link>
@@ -242,12 +244,12 @@ function PreviousNext({ previous, next }: { previous: LessonOutline | null; next
         <span />
       )}
       {next ? (
-        <Link to={lessonPaths.lesson(next.moduleSlug, next.slug)} className="group rounded-lg border border-bone-300 bg-white p-4 text-right hover:border-quench-500">
+        <Link to={paths.lesson(next.moduleSlug, next.slug)} className="group rounded-lg border border-bone-300 bg-white p-4 text-right hover:border-quench-500">
           <span className="eyebrow text-soot-600">Next →</span>
           <span className="mt-1 block font-display text-lg font-semibold text-soot-900 group-hover:text-quench-700">{next.title}</span>
         </Link>
       ) : (
-        <Link to={lessonPaths.modules} className="group rounded-lg border border-bone-300 bg-white p-4 text-right hover:border-quench-500">
+        <Link to={paths.modules} className="group rounded-lg border border-bone-300 bg-white p-4 text-right hover:border-quench-500">
           <span className="eyebrow text-soot-600">Course complete</span>
           <span className="mt-1 block font-display text-lg font-semibold text-soot-900">Back to all modules</span>
         </Link>

@@ -7,7 +7,7 @@ import { cx } from "@/components/ui/cx";
 import { PageBody, PageHeader } from "@/components/ui/page-header";
 import { Spinner } from "@/components/ui/spinner";
 import { lessonState, type LessonState } from "./course-outline";
-import { lessonPaths } from "./lesson-paths";
+import { paths } from "@/config/paths";
 
 const STATE_LABEL: Record<LessonState, string> = {
   "not-started": "Not started",
@@ -31,7 +31,7 @@ export function Component() {
       >
         {resume ? (
           <Link
-            to={lessonPaths.lesson(resume.moduleSlug, resume.slug)}
+            to={paths.lesson(resume.moduleSlug, resume.slug)}
             className="inline-flex min-h-11 items-center rounded-md bg-ember-500 px-5 font-semibold text-soot-950 hover:bg-ember-400"
           >
             {lessonState(resume) === "in-progress" ? "Continue" : "Start"}: {resume.title}
@@ -89,7 +89,7 @@ function LessonRow({ lesson, number }: { lesson: LessonOutline; number: number }
   const state = lessonState(lesson);
   const quiz = lesson.quiz;
   return (
-    <Link to={lessonPaths.lesson(lesson.moduleSlug, lesson.slug)} className="group flex flex-wrap items-start gap-x-4 gap-y-2 p-4 hover:bg-bone-50 sm:flex-nowrap">
+    <Link to={paths.lesson(lesson.moduleSlug, lesson.slug)} className="group flex flex-wrap items-start gap-x-4 gap-y-2 p-4 hover:bg-bone-50 sm:flex-nowrap">
       <span
         aria-hidden="true"
         className={cx(

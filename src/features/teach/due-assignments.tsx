@@ -5,9 +5,9 @@
 import { Link } from "react-router";
 import type { MyAssignment, MyAssignmentState } from "@shared/api/assignments";
 import { useMyAssignments } from "@/api/assignments";
-import { lessonPaths } from "@/features/lessons/lesson-paths";
 import { formatDay, percent, relativeDue } from "./format";
 import { Badge, ProgressBar, type BadgeTone } from "./ui";
+import { paths } from "@/config/paths";
 
 const ORDER: Record<MyAssignmentState, number> = { overdue: 0, due: 1, done: 2 };
 const BADGE: Record<MyAssignmentState, { label: string; tone: BadgeTone }> = {
@@ -55,7 +55,7 @@ function AssignmentItem({ assignment: a }: { assignment: MyAssignment }) {
           </p>
         </div>
         {a.next ? (
-          <Link to={lessonPaths.lesson(a.module.slug, a.next.lessonSlug)} className="text-sm font-semibold text-quench-700 underline-offset-2 hover:underline">
+          <Link to={paths.lesson(a.module.slug, a.next.lessonSlug)} className="text-sm font-semibold text-quench-700 underline-offset-2 hover:underline">
             Continue: {a.next.title}
           </Link>
         ) : null}

@@ -1,12 +1,13 @@
 import { useId, useState, type FormEvent } from "react";
 import { Link, useLocation, useNavigate } from "react-router";
 import type { AlloyComposition, SavedAlloy } from "@shared/api/alloys";
-import { ALLOY_ELEMENTS, ALLOY_NAME_MAX, type CustomAlloySpec } from "@shared/sim/alloy/params";
+import { ALLOY_NAME_MAX, type CustomAlloySpec } from "@shared/sim/alloy/params";
+import { compositionText } from "@shared/sim/alloy/format";
 import { useMe } from "@/api/auth";
 import { useAttachAlloy, useDeleteAlloy, useRenameAlloy, useSaveAlloy, useSavedAlloys } from "@/api/alloys";
 import { isApiError } from "@/api/client";
 import { useModules } from "@/api/lessons";
-import { signInPath } from "@/config/paths";
+import { paths, signInPath } from "@/config/paths";
 
 interface SavedAlloysProps {
   /** The alloy being edited: what "Save" stores. */
@@ -24,11 +25,6 @@ function errorText(error: unknown): string {
     return [error.message, fields].filter(Boolean).join(" ");
   }
   return "Something went wrong. Try again.";
-}
-
-export function compositionText(composition: AlloyComposition): string {
-  const parts = ALLOY_ELEMENTS.filter((el) => (composition[el] ?? 0) > 0).map((el) => `${composition[el]} ${el}`);
-  return parts.length ? parts.join(", ") : "pure iron";
 }
 
 /** Saved alloys of the signed-in user: save the current alloy, open, rename, delete; instructors attach to a lesson. */
@@ -192,17 +188,18 @@ function AttachForm({ alloy, onDone }: { alloy: SavedAlloy; onDone: () => void }
   const attach = useAttachAlloy();
   const lessonId = useId();
   const noteId = useId();
-  const lessons = modules.data?.modules.flatMap((m) => m.lessons.map((l) => ({ slug: l.slug, title: `${m.title} — ${l.title}` }))) ?? [];
+  const lessons =
+    modules.data?.modules.flatMap((m) => m.lessons.map((l) => ({ slug: l.slug, title: `${m.title} — ${l.title}`, href: paths.lesson(m.slug, l.slug), name: l.title }))) ?? [];
   const [lessonSlug, setLessonSlug] = useState("");
   const [note, setNote] = useState("");
-  const [done, setDone] = useState<string | null>(null);
+  const [done, setDone] = useState<{ name: string; href: string } | null>(null);
   const slug = lessonSlug || lessons[0]?.slug || "";
   return (
     <form
       className="mt-2 space-y-2 rounded-sm bg-bone-100 p-2"
       onSubmit={(e) => {
         e.preventDefault();
-        attach.mutate({ id: alloy.id, lessonSlug: slug, note }, { onSuccess: ({ attachment }) => setDone(`Attached to “${attachment.lessonSlug}”.`) });
+        attach.mutate({ id: alloy.id, lessonSlug: slug, note }, { onSuccess: ({ attachment }) => setDone(lessons.find((l) => l.slug === attachment.lessonSlug) ?? null) });
       }}
     >
       <div>
@@ -232,7 +229,15 @@ function AttachForm({ alloy, onDone }: { alloy: SavedAlloy; onDone: () => void }
         </button>
       </div>
       <p role="status" className="text-xs text-success-700">
-        {done}
+        {done ? (
+          <>
+            Attached to{" "}
+            <Link className="font-semibold underline underline-offset-2" to={done.href}>
+              {done.name}
+            </Link>
+            .
+          </>
+        ) : null}
       </p>
       {attach.isError ? (
         <p role="alert" className="text-xs text-danger-700">

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { decodeAlloyParams, decodeAlloySpec, encodeAlloyParams, encodeAlloySpec } from "@shared/sim/alloy/url-state";
+import { alloyLinkQuery, decodeAlloyParams, decodeAlloySpec, encodeAlloyParams, encodeAlloySpec } from "@shared/sim/alloy/url-state";
+import { compositionText } from "@shared/sim/alloy/format";
 import { paramsSchema, resolveAlloy, toCustomSpec, type AlloySpec } from "@shared/sim/alloy/params";
 import { ELEMENT_RANGE_MASS_PCT } from "@shared/sim/alloy/element-ranges";
 
@@ -90,5 +91,27 @@ describe("alloy specs", () => {
     expect(paramsSchema.safeParse({ alloys: [{ grade: "D2", C: 1 }] }).success).toBe(false);
     expect(paramsSchema.safeParse({ alloys: [{ grade: "X9" }] }).success).toBe(false);
     expect(paramsSchema.safeParse({ alloys: [{ name: "hot", Cr: 31 }] }).success).toBe(false);
+  });
+});
+
+describe("links that open alloys in the explorer (lesson task alloys)", () => {
+  it("opens the given alloys, at most three, and decodes back to the same alloys at default settings", () => {
+    const specs: AlloySpec[] = [
+      { name: "Task A_1", C: 1.2, Cr: 12.5 },
+      { grade: "D2" },
+      { name: "Task 100%", V: 9.75, C: 2.45 },
+      { grade: "440C" },
+    ];
+    const query = alloyLinkQuery(specs);
+    const decoded = decodeAlloyParams(query);
+    expect(decoded.problems).toEqual([]);
+    expect(decoded.params?.alloys).toEqual(specs.slice(0, 3));
+    expect(decoded.params?.coldTreatmentC).toBe(paramsSchema.parse({}).coldTreatmentC);
+    expect(new URLSearchParams(query).has("cold")).toBe(false);
+  });
+
+  it("writes a composition as the elements present, in the explorer's order", () => {
+    expect(compositionText({ Mo: 4, C: 1.05, Cr: 14, V: 0 })).toBe("1.05 C, 14 Cr, 4 Mo");
+    expect(compositionText({})).toBe("pure iron");
   });
 });
