@@ -6,55 +6,29 @@
  *   gradebook and exports it as CSV. Screenshots at 1280 and 390 px of the dashboard, cohort page,
  *   gradebook, admin users and outbox go to tests/artifacts/; axe checks each of those pages.
  *
- * Runs against the built client: dist/ (npm test builds it), or E2E_DIST_DIR if set.
+ * Runs against the built client: dist/ (npm test builds it), or CLIENT_DIST_DIR if set.
  */
 import fs from "node:fs";
-import os from "node:os";
-import path from "node:path";
-import type { AddressInfo } from "node:net";
-import type { Server } from "node:http";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import Papa from "papaparse";
-import { createApp, type GrainEdgeApp } from "../../server/app";
-import { loadConfig, PROJECT_ROOT } from "../../server/config";
-import { fontsReady, launchBrowser, openPage, screenshot, seriousAxeViolations, signIn, VIEWPORTS, type OpenedPage } from "../support/browser";
+import { fontsReady, launchBrowser, openPage, screenshot, seriousAxeViolations, signIn, startTestServer, VIEWPORTS, type OpenedPage, type TestServer } from "../support/browser";
 
-let product: GrainEdgeApp;
-let server: Server;
+let server: TestServer;
 let base: string;
 let browser: Browser;
-let dataDir: string;
 
 const NEW_STUDENT = { email: "nell.ashby@cinderfield.test", name: "Nell Ashby", password: "bright-straw-temper-41" };
 
 beforeAll(async () => {
-  const dist = process.env.E2E_DIST_DIR ?? path.join(PROJECT_ROOT, "dist");
-  if (!fs.existsSync(path.join(dist, "index.html"))) throw new Error(`${dist}/index.html is missing: run \`npx vite build\` first.`);
-  dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "grain-edge-e2e-teach-"));
-  const config = loadConfig({
-    NODE_ENV: "test",
-    DATABASE_PATH: path.join(dataDir, "e2e.sqlite"),
-    SESSION_SECRET: "e2e-teaching-secret-that-is-long-enough-0123456789",
-    SEED_DEMO: "1",
-    LOG_LEVEL: "silent",
-    CLIENT_DIST_DIR: dist,
-  });
-  product = await createApp(config);
-  server = await new Promise<Server>((resolve, reject) => {
-    const s = product.app.listen(0, "127.0.0.1", () => resolve(s));
-    s.once("error", reject);
-  });
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  server = await startTestServer();
+  base = server.baseUrl;
   browser = await launchBrowser();
 });
 
 afterAll(async () => {
   await browser?.close();
-  server?.closeAllConnections();
-  await new Promise<void>((resolve) => (server ? server.close(() => resolve()) : resolve()));
-  await product?.close();
-  if (dataDir) fs.rmSync(dataDir, { recursive: true, force: true });
+  await server?.close();
 });
 
 async function signedIn(role: "instructor" | "admin", viewport: { width: number; height: number } = VIEWPORTS.desktop): Promise<OpenedPage> {
@@ -181,7 +155,7 @@ describe("instructor invites, student joins and takes a quiz, instructor grades"
     const bestColumn = rows[0].indexOf("Iron, carbon and the phases of steel: best %");
     expect(bestColumn).toBeGreaterThan(0);
     expect(Number(nell[bestColumn])).toBeCloseTo((submittedScore.score / submittedScore.maxScore) * 100, 0);
-    const exported = await product.db.models.AuditLog.count({ where: { action: "grades.exported" } });
+    const exported = await server.product.db.models.AuditLog.count({ where: { action: "grades.exported" } });
     expect(exported).toBe(1);
     expect(problems.pageErrors).toEqual([]);
     await context.close();

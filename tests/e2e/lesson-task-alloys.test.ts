@@ -25,7 +25,7 @@ afterAll(async () => {
   await server?.close();
 });
 
-async function signedIn(role: "student" | "instructor", viewport = VIEWPORTS.desktop) {
+async function signedIn(role: "student" | "instructor", viewport: { width: number; height: number } = VIEWPORTS.desktop) {
   const opened = await openPage(browser, viewport);
   opened.page.setDefaultTimeout(60_000);
   await signIn(opened.page, server.baseUrl, role);

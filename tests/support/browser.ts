@@ -10,7 +10,7 @@ import type { AddressInfo } from "node:net";
 import type { Server } from "node:http";
 import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
 import AxeBuilder from "@axe-core/playwright";
-import { createApp } from "../../server/app";
+import { createApp, type GrainEdgeApp } from "../../server/app";
 import { loadConfig, PROJECT_ROOT } from "../../server/config";
 import { DEMO_PASSWORD } from "../../server/db/seed/demo";
 
@@ -41,6 +41,8 @@ export const VIEWPORTS = {
 
 export interface TestServer {
   baseUrl: string;
+  /** The running product, for tests that check what it stored. */
+  product: GrainEdgeApp;
   close(): Promise<void>;
 }
 
@@ -70,6 +72,7 @@ export async function startTestServer(): Promise<TestServer> {
 
   return {
     baseUrl: `http://127.0.0.1:${port}`,
+    product,
     async close() {
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));

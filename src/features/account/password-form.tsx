@@ -7,7 +7,7 @@ import { isApiError } from "@/api/client";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
-import { applyFieldErrors, messageFor } from "@/features/forms/api-errors";
+import { applyFieldErrors, messageFor } from "@/api/errors";
 
 // The shared request schema plus a confirmation field that never leaves the browser.
 const formSchema = passwordChangeRequestSchema

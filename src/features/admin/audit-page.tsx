@@ -6,9 +6,9 @@ import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { PageBody, PageHeader } from "@/components/ui/page-header";
 import { Spinner } from "@/components/ui/spinner";
-import { messageFor } from "@/features/forms/api-errors";
-import { formatDateTime } from "@/features/teach/format";
-import { Badge, type BadgeTone } from "@/features/teach/ui";
+import { messageFor } from "@/api/errors";
+import { formatDateTime } from "@/lib/format";
+import { Badge, type BadgeTone } from "@/components/ui/badge";
 
 function toneOf(action: string): BadgeTone {
   if (action.includes("failed") || action.includes("disabled")) return "danger";

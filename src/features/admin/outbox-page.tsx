@@ -10,9 +10,9 @@ import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { cx } from "@/components/ui/cx";
 import { PageBody, PageHeader } from "@/components/ui/page-header";
-import { messageFor } from "@/features/forms/api-errors";
-import { formatDateTime } from "@/features/teach/format";
-import { Loaded } from "@/features/teach/ui";
+import { messageFor } from "@/api/errors";
+import { formatDateTime } from "@/lib/format";
+import { Loaded } from "@/components/ui/loaded";
 
 export function Component() {
   const outbox = useOutbox();

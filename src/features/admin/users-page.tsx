@@ -10,9 +10,11 @@ import { useMe } from "@/api/auth";
 import { Button } from "@/components/ui/button";
 import { cx } from "@/components/ui/cx";
 import { PageBody, PageHeader } from "@/components/ui/page-header";
-import { messageFor } from "@/features/forms/api-errors";
-import { formatDateTime, formatDay } from "@/features/teach/format";
-import { Badge, Loaded, inputClass, selectClass } from "@/features/teach/ui";
+import { messageFor } from "@/api/errors";
+import { formatDateTime, formatDay } from "@/lib/format";
+import { Badge } from "@/components/ui/badge";
+import { Loaded } from "@/components/ui/loaded";
+import { inputClass, selectClass } from "@/components/ui/form-classes";
 
 const ROLE_LABEL: Record<Role, string> = { student: "Student", instructor: "Instructor", admin: "Admin" };
 

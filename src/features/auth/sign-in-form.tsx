@@ -7,7 +7,7 @@ import { isApiError } from "@/api/client";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
-import { applyFieldErrors, messageFor } from "@/features/forms/api-errors";
+import { applyFieldErrors, messageFor } from "@/api/errors";
 
 export function SignInForm({ onSignedIn }: { onSignedIn: (user: PublicUser) => void }) {
   const login = useLogin();

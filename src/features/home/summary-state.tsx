@@ -3,7 +3,7 @@ import type { UseQueryResult } from "@tanstack/react-query";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Spinner } from "@/components/ui/spinner";
-import { messageFor } from "@/features/forms/api-errors";
+import { messageFor } from "@/api/errors";
 
 /** Loading and error states for a home page's data, so each page only renders the happy path. */
 export function QueryState<T>({ query, children }: { query: UseQueryResult<T>; children: (data: T) => ReactNode }) {

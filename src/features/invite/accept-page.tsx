@@ -17,7 +17,7 @@ import { TextField } from "@/components/ui/field";
 import { PageBody, PageHeader } from "@/components/ui/page-header";
 import { Spinner } from "@/components/ui/spinner";
 import { paths } from "@/config/paths";
-import { messageFor } from "@/features/forms/api-errors";
+import { messageFor } from "@/api/errors";
 
 const formSchema = z.object({ displayName: displayNameSchema, password: passwordSchema });
 

@@ -10,7 +10,7 @@ import { useReviewEntry } from "@/api/notebook";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { cx } from "@/components/ui/cx";
-import { messageFor } from "@/features/forms/api-errors";
+import { messageFor } from "@/api/errors";
 
 const VERDICTS: { value: ReviewRequest["status"]; label: string; hint: string }[] = [
   { value: "reviewed", label: "Reviewed", hint: "The record is complete and the readings make sense." },

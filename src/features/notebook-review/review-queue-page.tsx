@@ -10,7 +10,7 @@ import { cx } from "@/components/ui/cx";
 import { PageBody, PageHeader } from "@/components/ui/page-header";
 import { Spinner } from "@/components/ui/spinner";
 import { paths } from "@/config/paths";
-import { messageFor } from "@/features/forms/api-errors";
+import { messageFor } from "@/api/errors";
 
 const FILTERS: { value: ReviewListQuery["status"]; label: string }[] = [
   { value: "unreviewed", label: "Awaiting review" },

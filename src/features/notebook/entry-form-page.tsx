@@ -6,7 +6,7 @@ import { Alert } from "@/components/ui/alert";
 import { PageBody, PageHeader } from "@/components/ui/page-header";
 import { EntryForm, newEntryDefaults, type EntryFormDefaults } from "./entry-form";
 import { todayIso } from "./format";
-import { Loaded } from "./ui";
+import { Loaded } from "@/components/ui/loaded";
 
 function defaultsFrom(entry: NotebookEntry): EntryFormDefaults {
   return {

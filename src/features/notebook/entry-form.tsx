@@ -26,7 +26,7 @@ import { Alert } from "@/components/ui/alert";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { paths } from "@/config/paths";
-import { messageFor } from "@/features/forms/api-errors";
+import { messageFor } from "@/api/errors";
 import { ComputedPanel } from "./computed-panel";
 import { NumberField, SelectField, TextAreaField } from "./form-controls";
 import { SafetyCautions } from "./safety-cautions";

@@ -19,14 +19,15 @@ import { Alert } from "@/components/ui/alert";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { PageBody, PageHeader } from "@/components/ui/page-header";
 import { paths } from "@/config/paths";
-import { messageFor } from "@/features/forms/api-errors";
+import { messageFor } from "@/api/errors";
 import { ComputedPanel } from "./computed-panel";
 import { FileUploader } from "./file-uploader";
 import { formatBytes, formatDateTime, formatDay, formatHours, formatTempC } from "./format";
 import { HardnessChart } from "./hardness-chart";
 import { SafetyCautions } from "./safety-cautions";
 import { formatComposition } from "./steel";
-import { Loaded, Section, StatusBadge } from "./ui";
+import { Loaded } from "@/components/ui/loaded";
+import { Section, StatusBadge } from "./ui";
 
 function Step({ label, children }: { label: string; children: ReactNode }) {
   return (

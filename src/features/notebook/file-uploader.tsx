@@ -9,7 +9,7 @@ import { UPLOAD_RULES } from "@shared/api/notebook";
 import { isApiError } from "@/api/client";
 import { notebookQueryKeys, uploadNotebookFile } from "@/api/notebook";
 import { cx } from "@/components/ui/cx";
-import { messageFor } from "@/features/forms/api-errors";
+import { messageFor } from "@/api/errors";
 import { formatBytes } from "./format";
 
 interface UploadRow {

@@ -7,7 +7,8 @@ import { ButtonLink } from "@/components/ui/button";
 import { PageBody, PageHeader } from "@/components/ui/page-header";
 import { paths } from "@/config/paths";
 import { formatBytes, formatDay, formatHrc, formatParameter } from "./format";
-import { Loaded, StatusBadge } from "./ui";
+import { Loaded } from "@/components/ui/loaded";
+import { StatusBadge } from "./ui";
 
 function StorageMeter({ storage }: { storage: StorageUsage }) {
   const share = Math.min(1, storage.usedBytes / storage.quotaBytes);

@@ -1,13 +1,7 @@
 /** Small building blocks of the notebook screens. */
 import type { ReactNode } from "react";
-import type { UseQueryResult } from "@tanstack/react-query";
 import { REVIEW_STATUS_LABELS, type ReviewStatus } from "@shared/api/notebook";
-import { isApiError } from "@/api/client";
-import { Alert } from "@/components/ui/alert";
-import { Button } from "@/components/ui/button";
 import { cx } from "@/components/ui/cx";
-import { Spinner } from "@/components/ui/spinner";
-import { messageFor } from "@/features/forms/api-errors";
 
 const STATUS_STYLE: Record<ReviewStatus, string> = {
   unreviewed: "border-soot-500/30 bg-bone-100 text-soot-700",
@@ -42,21 +36,3 @@ export function Section({ id, title, eyebrow, actions, children, className }: { 
   );
 }
 
-/** Loading and error states for a page's query; a 404 gets its own wording. */
-export function Loaded<T>({ query, label, children }: { query: UseQueryResult<T>; label: string; children: (data: T) => ReactNode }) {
-  if (query.isPending) return <Spinner label={`Loading the ${label}`} />;
-  if (query.isError) {
-    const missing = isApiError(query.error) && query.error.status === 404;
-    return (
-      <Alert tone="danger" title={missing ? `This ${label} was not found` : `The ${label} could not be loaded`}>
-        <p>{missing ? "It may have been deleted, or it belongs to someone else." : messageFor(query.error)}</p>
-        {missing ? null : (
-          <Button variant="secondary" className="mt-3" onClick={() => query.refetch()}>
-            Try again
-          </Button>
-        )}
-      </Alert>
-    );
-  }
-  return <>{children(query.data)}</>;
-}

@@ -3,9 +3,13 @@ import { MAX_ATTEMPTS_LIMIT, type CohortAssignment } from "@shared/api/assignmen
 import { useCohortAssignments, useCreateAssignment, useDeleteAssignment, useUpdateAssignment } from "@/api/assignments";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
-import { messageFor } from "@/features/forms/api-errors";
-import { formatDay, fromLocalInput, plural, relativeDue, toLocalInput } from "./format";
-import { Badge, Loaded, Panel, ProgressBar, inputClass, selectClass } from "./ui";
+import { messageFor } from "@/api/errors";
+import { formatDay, fromLocalInput, plural, relativeDue, toLocalInput } from "@/lib/format";
+import { Badge } from "@/components/ui/badge";
+import { Loaded } from "@/components/ui/loaded";
+import { Panel } from "@/components/ui/panel";
+import { ProgressBar } from "@/components/ui/progress-bar";
+import { inputClass, selectClass } from "@/components/ui/form-classes";
 
 const ATTEMPT_CHOICES = [null, 1, 2, 3, 4, 5, 10, MAX_ATTEMPTS_LIMIT] as const;
 const attemptsLabel = (n: number | null) => (n === null ? "Unlimited" : plural(n, "attempt"));

@@ -10,15 +10,17 @@ import { Alert } from "@/components/ui/alert";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { PageBody, PageHeader } from "@/components/ui/page-header";
-import { messageFor } from "@/features/forms/api-errors";
+import { messageFor } from "@/api/errors";
 import { AssignmentsEditor } from "./assignments-editor";
 import { CohortStudents } from "./cohort-students";
-import { plural } from "./format";
+import { plural } from "@/lib/format";
 import { InvitationsList } from "./invitations-list";
 import { InviteForm } from "./invite-form";
 import { teachPaths } from "./paths";
 import { RosterImport } from "./roster-import";
-import { Badge, Loaded, Panel } from "./ui";
+import { Badge } from "@/components/ui/badge";
+import { Loaded } from "@/components/ui/loaded";
+import { Panel } from "@/components/ui/panel";
 
 export function Component() {
   const cohortId = Number(useParams().cohortId);

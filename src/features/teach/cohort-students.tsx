@@ -4,10 +4,12 @@ import type { CohortDetail, CohortStudent } from "@shared/api/cohorts";
 import { useMoveStudent, useRemoveStudent } from "@/api/cohorts";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
-import { messageFor } from "@/features/forms/api-errors";
-import { formatDay } from "./format";
+import { messageFor } from "@/api/errors";
+import { formatDay } from "@/lib/format";
 import { teachPaths } from "./paths";
-import { Badge, Panel, selectClass } from "./ui";
+import { Badge } from "@/components/ui/badge";
+import { Panel } from "@/components/ui/panel";
+import { selectClass } from "@/components/ui/form-classes";
 
 /** The cohort's students: open their attempts, move them to another of your cohorts, or remove them. */
 export function CohortStudents({ data }: { data: CohortDetail }) {

@@ -7,9 +7,9 @@ import { useCreateCohort } from "@/api/cohorts";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
-import { messageFor } from "@/features/forms/api-errors";
+import { messageFor } from "@/api/errors";
 import { teachPaths } from "./paths";
-import { selectClass } from "./ui";
+import { selectClass } from "@/components/ui/form-classes";
 
 /** "New cohort": a name (and, for admins, who teaches it); opens the new cohort's page. */
 export function CreateCohortForm({ onDone }: { onDone: () => void }) {

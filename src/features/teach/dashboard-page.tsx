@@ -13,9 +13,12 @@ import { Stat, StatGrid } from "@/components/ui/stat";
 import { firstName } from "@/features/home/format";
 import { LabShortcuts } from "@/features/home/lab-shortcuts";
 import { CreateCohortForm } from "./create-cohort-form";
-import { formatDay, percent, plural, relativeDue } from "./format";
+import { formatDay, percent, plural, relativeDue } from "@/lib/format";
 import { teachPaths } from "./paths";
-import { Badge, Loaded, Panel, ProgressBar } from "./ui";
+import { Badge } from "@/components/ui/badge";
+import { Loaded } from "@/components/ui/loaded";
+import { Panel } from "@/components/ui/panel";
+import { ProgressBar } from "@/components/ui/progress-bar";
 
 export function Component() {
   const { data: user } = useMe();

@@ -5,8 +5,9 @@
 import { Link } from "react-router";
 import type { MyAssignment, MyAssignmentState } from "@shared/api/assignments";
 import { useMyAssignments } from "@/api/assignments";
-import { formatDay, percent, relativeDue } from "./format";
-import { Badge, ProgressBar, type BadgeTone } from "./ui";
+import { formatDay, percent, relativeDue } from "@/lib/format";
+import { Badge, type BadgeTone } from "@/components/ui/badge";
+import { ProgressBar } from "@/components/ui/progress-bar";
 import { paths } from "@/config/paths";
 
 const ORDER: Record<MyAssignmentState, number> = { overdue: 0, due: 1, done: 2 };

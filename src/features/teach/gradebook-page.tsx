@@ -7,12 +7,13 @@ import { gradebookCsvUrl, useCohortAnalytics, useGradebook } from "@/api/gradebo
 import { buttonClasses, ButtonLink } from "@/components/ui/button";
 import { PageBody, PageHeader } from "@/components/ui/page-header";
 import { Stat, StatGrid } from "@/components/ui/stat";
-import { formatDay, percent, plural } from "./format";
+import { formatDay, percent, plural } from "@/lib/format";
 import { GradebookTable } from "./gradebook-table";
 import { teachPaths } from "./paths";
 import { ProgressChart } from "./progress-chart";
 import { QuestionAnalytics } from "./question-analytics";
-import { Loaded, Panel } from "./ui";
+import { Loaded } from "@/components/ui/loaded";
+import { Panel } from "@/components/ui/panel";
 
 export function Component() {
   const cohortId = Number(useParams().cohortId);

@@ -17,9 +17,9 @@ import {
 } from "@tanstack/react-table";
 import type { Gradebook, GradebookCell, GradebookQuiz, GradebookStudent } from "@shared/api/gradebook";
 import { cx } from "@/components/ui/cx";
-import { percent } from "./format";
+import { percent } from "@/lib/format";
 import { teachPaths } from "./paths";
-import { inputClass } from "./ui";
+import { inputClass } from "@/components/ui/form-classes";
 
 type ScoreView = "best" | "latest";
 const column = createColumnHelper<GradebookStudent>();

@@ -2,9 +2,11 @@ import type { InvitationState, InvitationView } from "@shared/api/invitations";
 import { useInvitations, useResendInvitation, useRevokeInvitation } from "@/api/invitations";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
-import { messageFor } from "@/features/forms/api-errors";
-import { formatDateTime } from "./format";
-import { Badge, Loaded, Panel, type BadgeTone } from "./ui";
+import { messageFor } from "@/api/errors";
+import { formatDateTime } from "@/lib/format";
+import { Badge, type BadgeTone } from "@/components/ui/badge";
+import { Loaded } from "@/components/ui/loaded";
+import { Panel } from "@/components/ui/panel";
 
 const STATE: Record<InvitationState, { label: string; tone: BadgeTone }> = {
   pending: { label: "Sending", tone: "straw" },

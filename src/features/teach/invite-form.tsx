@@ -5,7 +5,7 @@ import { useInvite } from "@/api/invitations";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
-import { messageFor } from "@/features/forms/api-errors";
+import { messageFor } from "@/api/errors";
 
 const schema = z.object({ email: inviteEmailSchema, displayName: z.union([z.literal(""), displayNameSchema]) });
 

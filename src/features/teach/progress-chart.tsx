@@ -2,7 +2,7 @@
 import { Area, Bar, CartesianGrid, ComposedChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { CohortAnalytics } from "@shared/api/gradebook";
 import { CHART, TICK } from "./chart-style";
-import { formatShortDate, percent } from "./format";
+import { formatShortDate, percent } from "@/lib/format";
 
 export function ProgressChart({ analytics }: { analytics: CohortAnalytics }) {
   const points = analytics.progress.map((p) => ({ ...p, pct: Math.round(p.completion * 1000) / 10 }));

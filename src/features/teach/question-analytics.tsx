@@ -7,8 +7,8 @@ import { Bar, BarChart, CartesianGrid, Cell, ResponsiveContainer, Tooltip, XAxis
 import type { QuizAnalytics } from "@shared/api/gradebook";
 import { cx } from "@/components/ui/cx";
 import { CHART, TICK } from "./chart-style";
-import { percent } from "./format";
-import { selectClass } from "./ui";
+import { percent } from "@/lib/format";
+import { selectClass } from "@/components/ui/form-classes";
 
 /** Below this share the question is flagged: most of the cohort got it wrong. */
 const WEAK = 0.5;

@@ -4,9 +4,10 @@ import { useRosterImport, useRosterPreview } from "@/api/invitations";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { cx } from "@/components/ui/cx";
-import { messageFor } from "@/features/forms/api-errors";
-import { plural } from "./format";
-import { Badge, Panel, type BadgeTone } from "./ui";
+import { messageFor } from "@/api/errors";
+import { plural } from "@/lib/format";
+import { Badge, type BadgeTone } from "@/components/ui/badge";
+import { Panel } from "@/components/ui/panel";
 
 const STATUS: Record<RosterRowStatus, { label: string; tone: BadgeTone }> = {
   new: { label: "Will be invited", tone: "success" },

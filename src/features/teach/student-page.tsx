@@ -8,9 +8,11 @@ import { useStudentAttempts } from "@/api/gradebook";
 import { ButtonLink } from "@/components/ui/button";
 import { cx } from "@/components/ui/cx";
 import { PageBody, PageHeader } from "@/components/ui/page-header";
-import { formatDateTime, percent, plural } from "./format";
+import { formatDateTime, percent, plural } from "@/lib/format";
 import { teachPaths } from "./paths";
-import { Badge, Loaded, Panel } from "./ui";
+import { Badge } from "@/components/ui/badge";
+import { Loaded } from "@/components/ui/loaded";
+import { Panel } from "@/components/ui/panel";
 
 export function Component() {
   const params = useParams();
