@@ -59,11 +59,38 @@ function windowFraction(w: DissolutionWindow, tempC: number): number {
 }
 
 /**
+ * Warning for cementite steels with chromium. science-reference §5.2 gives only the binary Acm line and no
+ * chromium correction for it (its one Cr term is Andrews' Ac1 +16.9 °C per % Cr, [Mem]), so the effect is
+ * not modelled; this says so instead of inventing a shift.
+ */
+export function chromiumAcmWarning(chromiumMassPct: number, cementiteChromiumShare: number | undefined): string {
+  const share = cementiteChromiumShare === undefined ? "" : ` (here ${cementiteChromiumShare.toFixed(3)} of its metal sites)`;
+  return (
+    `Chromium's effect on cementite dissolution is not modelled: the dissolved share comes from the binary Fe–C Acm line, ` +
+    `so this steel (${chromiumMassPct} % Cr) gets the same carbon in solution as a plain-carbon steel of equal carbon at the same temperature. ` +
+    `In real steels chromium concentrates in the cementite${share} and raises the critical temperatures (Andrews: Ac1 +16.9 °C per % Cr), ` +
+    `so more carbide stays undissolved and less carbon enters solution than shown.`
+  );
+}
+
+/**
+ * Warning for high-speed steels (an M6C population). The M6C and MC windows are [App] heuristics with no source
+ * for these steels; nothing in science-reference §2 gives their carbide solubility, so the limitation is stated.
+ */
+export const HIGH_SPEED_STEEL_WARNING =
+  "High-speed steel (M6C present): the M6C and MC dissolution windows are app heuristics, not calibrated on these steels, and the allocation " +
+  "ties most carbon to M6C. The carbon in solution, and the as-quenched hardness computed from it, therefore read low and Ms reads high: " +
+  "M2 from 1200 °C gives about 0.35 % C and 53 HRC here, while roughly 0.5 % C in solution and 63–66 HRC hardened and tempered are typical " +
+  "(from memory). Part of that hardness comes from secondary hardening when tempered near 540–560 °C, which the app does not model.";
+
+/**
  * Dissolved fraction of each CARB-1 carbide after austenitizing at `austenitizingTempC` (°C, 0–1400).
  * Cementite (M3C): from the Acm lever rule (science-reference §5.2, [Computed] straight Acm line) — the
- * fraction that leaves austenite at C_γ(T) with the remaining cementite, exact for binary Fe–C (other
- * alloying shifts Acm; a warning says so). Alloy carbides (MC, M6C, M7C3, M23C6): [App] linear windows,
- * see DEFAULT_DISSOLUTION_WINDOWS. Below 727 °C nothing dissolves (no austenite).
+ * fraction that leaves austenite at C_γ(T) with the remaining cementite, exact for binary Fe–C. Chromium's
+ * effect (it enriches cementite and delays its dissolution) has no sourced correction and is not modelled:
+ * a warning says so (chromiumAcmWarning); other alloying gets a general warning. Alloy carbides (MC, M6C,
+ * M7C3, M23C6): [App] linear windows, see DEFAULT_DISSOLUTION_WINDOWS; with M6C present (high-speed steels)
+ * a warning says the windows are uncalibrated there. Below 727 °C nothing dissolves (no austenite).
  */
 export function dissolvedFractionsForAustenitizing(
   comp: Composition,
@@ -93,6 +120,7 @@ export function dissolvedFractionsForAustenitizing(
     dissolvedFraction[p.type] = windowFraction(windows[p.type], tempC);
     method[p.type] = "app-heuristic";
   }
+  if (allocation.phases.some((p) => p.type === "M6C")) warnings.push(HIGH_SPEED_STEEL_WARNING);
 
   let acmCarbon: number | undefined;
   const cementite = allocation.phases.find((p) => p.type === "M3C");
@@ -112,8 +140,9 @@ export function dissolvedFractionsForAustenitizing(
     const f = (acmCarbon * mass - 100 * carbon) / denominator;
     dissolvedFraction.M3C = Math.min(1, Math.max(0, f));
     method.M3C = "acm-lever-rule";
-    const alloyed = c.Cr + c.Mn + c.Mo + c.W + c.V + c.Ni + c.Si;
-    if (alloyed > 1) warnings.push("The Acm line is that of binary Fe–C; Cr, Mn and other alloying shift it, so the cementite fraction is approximate.");
+    if (c.Cr > 0) warnings.push(chromiumAcmWarning(c.Cr, cementite.chromiumShare));
+    const otherAlloying = c.Mn + c.Mo + c.W + c.V + c.Ni + c.Si;
+    if (otherAlloying > 1) warnings.push("The Acm line is that of binary Fe–C; Mn, Si and other alloying also shift it, so the cementite fraction is approximate.");
     if (c.C < EUTECTOID_C && tempC < 910) warnings.push("Hypoeutectoid steel: ferrite may remain below A3; this model puts all matrix into austenite.");
   }
   return { dissolvedFraction, method, acmCarbonMassPct: acmCarbon, warnings };

@@ -1,6 +1,7 @@
 import { ELEMENTS, validateComposition, type Composition, type Element } from "../composition";
 import { InputError } from "../errors";
 import { requireInRange, requireInteger, requireNonNegative, requireOneOf, requirePositive } from "../validate";
+import { IRON_CARBON_POINTS } from "../heat-treatment/iron-carbon-diagram";
 import { liquidusTempC, solidusTempC } from "./liquidus-solidus";
 import { PARTITION_DATA, type PrimaryPhase } from "./partition-data";
 
@@ -45,6 +46,11 @@ export const INGOT_DEFAULTS = Object.freeze({
   cells: 100,
   /** Mould temperature, °C [App]. */
   mouldTempC: 25,
+  /**
+   * Carbon of the last liquid at which it freezes as eutectic, mass %: the Fe–C eutectic, 4.30 %
+   * (ASM and Callister diagrams, science-reference §5.2 [Checked]). Alloying lowers it.
+   */
+  eutecticCarbonMassPct: IRON_CARBON_POINTS.asm.eutectic.carbonMassPct,
 });
 
 /** Wall boundary of the ingot: a convective mould (h, sink temperature) or a fixed surface temperature. */
@@ -100,6 +106,12 @@ export interface IngotParams {
   reportSolidFraction?: number;
   /** Extra α added for dendrite-arm coarsening (Won & Thomas use 0.1); default 0. */
   coarseningAlpha?: number;
+  /**
+   * Carbon content of the liquid pool at which the remaining liquid freezes as eutectic, mass %
+   * (bounds the ingot-scale Scheil enrichment; needs carbon among the tracked solutes). Default
+   * 4.30 (binary Fe–C); Infinity switches the bound off. Must exceed the melt's carbon.
+   */
+  eutecticCarbonMassPct?: number;
 }
 
 /** IngotParams with every default filled in and validated. */
@@ -127,6 +139,7 @@ export interface ResolvedIngotParams {
   liquidDiffusivityM2PerS: number;
   reportSolidFraction: number;
   coarseningAlpha: number;
+  eutecticCarbonMassPct: number;
 }
 
 /** Validates IngotParams and fills in defaults; pushes model warnings into `warnings`. */
@@ -187,6 +200,12 @@ export function resolveIngotParams(p: IngotParams, warnings: string[]): Resolved
   const microsegregation = requireOneOf("microsegregation", p.microsegregation ?? "back-diffusion", ["scheil", "back-diffusion", "lever"] as const);
   const boundaryLayerM = p.boundaryLayerM ?? INGOT_DEFAULTS.boundaryLayerM;
   if (boundaryLayerM !== Infinity) requireNonNegative("boundaryLayerM", boundaryLayerM);
+  const eutecticCarbonMassPct = p.eutecticCarbonMassPct ?? INGOT_DEFAULTS.eutecticCarbonMassPct;
+  if (eutecticCarbonMassPct !== Infinity) requirePositive("eutecticCarbonMassPct", eutecticCarbonMassPct);
+  const carbon = composition?.C ?? 0;
+  if (carbon >= eutecticCarbonMassPct) {
+    throw new InputError("composition.C", carbon, `< eutecticCarbonMassPct (${eutecticCarbonMassPct}): hypo-eutectic steels only (above is the cast-iron range)`);
+  }
 
   return {
     geometry,
@@ -216,6 +235,7 @@ export function resolveIngotParams(p: IngotParams, warnings: string[]): Resolved
       maxExclusive: true,
     }),
     coarseningAlpha: requireNonNegative("coarseningAlpha", p.coarseningAlpha ?? 0),
+    eutecticCarbonMassPct,
   };
 }
 

@@ -1,7 +1,7 @@
 import type { Element } from "../composition";
 import { InputError, StabilityError } from "../errors";
 import { requireInRange, requirePositive } from "../validate";
-import { armSpacingUnchecked } from "./arm-spacing";
+import { ARM_SPACING_FIT_MAX_CARBON_MASS_PCT, armSpacingCarbonClampWarning, armSpacingUnchecked } from "./arm-spacing";
 import { clyneKurzOmegaUnchecked } from "./back-diffusion";
 import { effectivePartitionUnchecked } from "./effective-partition";
 import { resolveIngotParams, type IngotParams, type ResolvedIngotParams } from "./ingot-params";
@@ -16,7 +16,15 @@ import { arrheniusDiffusivity, SOLID_DIFFUSION_DATA, type SolidDiffusionDatum } 
  *  - macro: the remaining liquid is one well-mixed pool; solid forming anywhere in a step
  *    takes k_eff·C_pool (Burton–Prim–Slichter k_eff from the front speed and the
  *    boundary-layer "mixing" control), integrated exactly over the step (ingot-scale Scheil).
- *    This gives the wall→centre macrosegregation profile (positive at the centre);
+ *    This gives the wall→centre macrosegregation profile (positive at the centre).
+ *    Ingot-scale Scheil diverges as the last liquid vanishes (C_pool = C0·f_L^(k_eff − 1)): the
+ *    last liquid really is the most enriched, but without a bound the last node to freeze would
+ *    take C0·(V_node/V_total)^(k − 1) — a spike that grows as the grid is refined (≈ 100–180 × C0
+ *    in the centre node of a 50-node cylinder with perfect mixing). The bound is the eutectic:
+ *    once the pool's carbon reaches eutecticCarbonMassPct (Fe–C: 4.30 %), the remaining liquid
+ *    freezes as eutectic at its own composition (Scheil with a eutectic end point,
+ *    science-reference §3.1 check 6), so every solute's pool stops rising there. Without tracked
+ *    carbon nothing bounds it and a warning says so;
  *  - micro: when a node is fully solid, its local freezing time, cooling rate through the
  *    freezing range, λ2 (Won & Thomas) and α = D_s·t_f/(λ2/2)² give the dendrite-core and
  *    interdendritic compositions (Scheil, Clyne–Kurz back-diffusion or lever rule).
@@ -80,6 +88,11 @@ export interface IngotState {
   /** Largest stable time step, s (see maxStableDtS). */
   readonly maxStableDtS: number;
   readonly warnings: readonly string[];
+  /**
+   * Section solid fraction at which the liquid pool's carbon reached the eutectic (the rest froze
+   * as eutectic at the pool composition); null until then or without tracked carbon.
+   */
+  eutecticSolidFraction: number | null;
   timeS: number;
   steps: number;
   /** Solid volume (same units as volume). */
@@ -105,6 +118,14 @@ interface IngotWork {
   carbonMassPct: number;
   hSolidus: number;
   hLiquidus: number;
+  /** Index of carbon in solutes (−1: not tracked, no eutectic bound). */
+  carbonIndex: number;
+  /** The pool has reached the eutectic: solid now forms at the pool composition. */
+  eutecticReached: boolean;
+  /** Per-solute k_eff of the current step. */
+  kEff: Float64Array;
+  /** The same array as state.warnings (mutable here). */
+  warnings: string[];
 }
 
 /**
@@ -172,7 +193,7 @@ export function createIngot(params: IngotParams): IngotState {
   if (p.microsegregation === "back-diffusion" && p.trackedElements.length > 0 && !(carbonMassPct > 0)) {
     warnings.push("No carbon in the composition: the arm spacing (and so back-diffusion) is undefined; solutes are treated as Scheil.");
   }
-  if (carbonMassPct > 1.0) warnings.push(`C = ${carbonMassPct} % is above 1.0 %: the arm-spacing fit is extrapolated.`);
+  if (carbonMassPct > ARM_SPACING_FIT_MAX_CARBON_MASS_PCT) warnings.push(armSpacingCarbonClampWarning(carbonMassPct));
   const solutes: IngotSolute[] = p.trackedElements.map((element) => {
     const datum = PARTITION_DATA[element]!;
     const kEq = p.partitionPhase === "gamma" ? datum.kGamma : datum.kDelta;
@@ -196,6 +217,13 @@ export function createIngot(params: IngotParams): IngotState {
     };
   });
 
+  const carbonIndex = solutes.findIndex((s) => s.element === "C");
+  if (solutes.length > 0 && carbonIndex < 0 && p.boundaryLayerM !== Infinity) {
+    warnings.push(
+      "Carbon is not tracked, so nothing bounds the enrichment of the last liquid (ingot-scale Scheil diverges as the last liquid vanishes): the last nodes to freeze are exaggerated, the more so the finer the grid.",
+    );
+  }
+
   return {
     params: p,
     cells: n,
@@ -214,6 +242,7 @@ export function createIngot(params: IngotParams): IngotState {
     solutes,
     maxStableDtS: maxDt,
     warnings,
+    eutecticSolidFraction: null,
     timeS: 0,
     steps: 0,
     solidVolume: 0,
@@ -230,6 +259,10 @@ export function createIngot(params: IngotParams): IngotState {
       carbonMassPct,
       hSolidus,
       hLiquidus,
+      carbonIndex,
+      eutecticReached: false,
+      kEff: new Float64Array(solutes.length),
+      warnings,
     },
   };
 }
@@ -376,17 +409,43 @@ function updateSolutes(state: IngotState, dtS: number): void {
     // Front speed: solid volume rate over the current front area (slab: 1; cylinder: r_front).
     const frontArea = p.geometry === "slab" ? 1 : Math.sqrt(2 * liquidOld);
     const velocity = frontArea > 0 ? dV / (dtS * frontArea) : Infinity;
+    const kEff = w.kEff;
+    for (let s = 0; s < solutes.length; s++) {
+      kEff[s] = effectivePartitionUnchecked(solutes[s].partitionCoefficient, velocity, p.boundaryLayerM, p.liquidDiffusivityM2PerS);
+      solutes[s].effectivePartitionCoefficient = kEff[s];
+    }
+    // Scheil from liquidOld down to liquidSplit, eutectic (solid = pool composition) below it.
+    let liquidSplit = liquidNew;
+    if (w.eutecticReached) liquidSplit = liquidOld;
+    else if (w.carbonIndex >= 0 && kEff[w.carbonIndex] < 1) {
+      // Liquid volume at which the carbon pool reaches C_E: L = L_old·(C_E/C_pool)^(1/(k − 1)).
+      const poolC = solutes[w.carbonIndex].liquidPoolMassPct;
+      const atEutectic = liquidOld * Math.pow(p.eutecticCarbonMassPct / poolC, 1 / (kEff[w.carbonIndex] - 1));
+      if (atEutectic > liquidNew) {
+        liquidSplit = Math.min(liquidOld, atEutectic);
+        w.eutecticReached = true;
+        const fraction = 1 - liquidSplit / state.totalVolume;
+        state.eutecticSolidFraction = fraction;
+        if (1 - fraction >= 1e-3) {
+          w.warnings.push(
+            `The last liquid reached the Fe–C eutectic carbon (${p.eutecticCarbonMassPct} % C) with ${(100 * (1 - fraction)).toPrecision(2)} % of the section still liquid; ` +
+              "that liquid is taken to freeze as eutectic at its own composition, which bounds the centre's enrichment. Cr, V, Mo and W lower the eutectic carbon, so for alloy steels this bound is an upper limit.",
+          );
+        }
+      }
+    }
     for (let s = 0; s < solutes.length; s++) {
       const sol = solutes[s];
-      const kEff = effectivePartitionUnchecked(sol.partitionCoefficient, velocity, p.boundaryLayerM, p.liquidDiffusivityM2PerS);
-      sol.effectivePartitionCoefficient = kEff;
       const pool = sol.liquidPoolMassPct;
       let toSolid: number;
-      if (lastLiquid) toSolid = pool * liquidOld;
-      else {
-        const newPool = pool * Math.pow(liquidNew / liquidOld, kEff - 1);
-        toSolid = pool * liquidOld - newPool * liquidNew;
-        sol.liquidPoolMassPct = newPool;
+      if (liquidSplit >= liquidOld) {
+        toSolid = lastLiquid ? pool * liquidOld : pool * (liquidOld - liquidNew);
+      } else if (lastLiquid && liquidSplit <= 0) {
+        toSolid = pool * liquidOld; // the Scheil pool would diverge; all solute left goes to the last solid
+      } else {
+        const poolAtSplit = pool * Math.pow(liquidSplit / liquidOld, kEff[s] - 1);
+        toSolid = pool * liquidOld - poolAtSplit * liquidNew;
+        sol.liquidPoolMassPct = poolAtSplit;
       }
       const perVolume = toSolid / dV;
       const solid = sol.solidSolute;

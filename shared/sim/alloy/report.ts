@@ -82,7 +82,8 @@ export const FIGURE_INFO: Record<FigureId, FigureInfo> = {
   },
   hardness: {
     title: "As-quenched hardness (martensite)",
-    method: "Hardness of fully martensitic steel from the carbon dissolved in austenite at the hardening temperature (the ASTM A255 initial-hardness polynomial, held at its 0.7 % C value above 0.7 % C, where measured hardness levels off). Retained austenite and undissolved carbides are not in this number.",
+    method:
+      "Hardness of fully martensitic steel from the carbon dissolved in austenite at the hardening temperature (the ASTM A255 initial-hardness polynomial, held at its 0.7 % C value above 0.7 % C, where measured hardness levels off). Retained austenite and undissolved carbides are not in this number. For cementite steels the dissolved carbon comes from the binary iron–carbon Acm line: chromium's effect is not modelled, so 52100 comes out like a plain-carbon steel of equal carbon, although its chromium-enriched cementite dissolves more slowly. For high-speed steels the carbide dissolution is an uncalibrated app heuristic that leaves too little carbon in solution, and secondary hardening on tempering is not modelled, so the value reads low.",
     source: "ASTM A255 initial-hardness polynomial (calibrated 0.1–0.7 % C); plateau above 0.7 % C after Krauss (1999).",
   },
   "ms-retained-austenite": {
@@ -226,7 +227,9 @@ export function alloyReport(alloy: ResolvedAlloy, options: AlloyReportOptions): 
     const carbon = hardened!.solution.carbonMassPct;
     const h = martensitePlateauHardnessHrc(carbon);
     numbers.hardnessHrc = h.value;
-    return { value: `${formatNumber(h.value, 3)} HRC`, details: [`${formatMassPct(carbon)} C in solution at ${tempC} °C`, `≈ ${Math.round(hrcToHv(Math.min(68, Math.max(20, h.value))))} HV`], warnings: h.warnings };
+    // The carbon in solution comes from the dissolution step, so its limits (Cr and Acm, high-speed steels) apply here too.
+    const warnings = [...new Set([...h.warnings, ...dissolutionWarnings])];
+    return { value: `${formatNumber(h.value, 3)} HRC`, details: [`${formatMassPct(carbon)} C in solution at ${tempC} °C`, `≈ ${Math.round(hrcToHv(Math.min(68, Math.max(20, h.value))))} HV`], warnings };
   });
   figures["ms-retained-austenite"] = guard("ms-retained-austenite", error, () => {
     const ms = andrewsMsWithWarnings(restrictToCore(hardened!.solution.composition));

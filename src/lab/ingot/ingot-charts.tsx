@@ -47,7 +47,9 @@ export function SegregationChart({ run, element }: { run: IngotRun; element: Ing
             {formatMassPct(chosen[Math.floor(n / 2)])} at mid-radius, {formatMassPct(chosen[n - 2])} next to the centre (melt{" "}
             {formatMassPct(nominal)}).
             {centre !== null && centre > SEGREGATION_MAX
-              ? ` The centre point (${centre.toFixed(1)}×) is off the scale: the model puts all solute left in the last liquid into it; a real ingot forms carbide or eutectic there instead.`
+              ? run.tracked.includes("C")
+                ? ` The centre point (${centre.toFixed(1)}×) is off the scale: the last liquid to freeze is the most enriched. The model lets it enrich until its carbon reaches the iron–carbon eutectic (4.3 % C), where what is left freezes at its own composition; alloying lowers that limit in real steels.`
+                : ` The centre point (${centre.toFixed(1)}×) is off the scale: without carbon nothing bounds the enrichment of the last liquid, so the model exaggerates it.`
               : ""}
           </>
         ) : (

@@ -44,8 +44,8 @@ export function IngotMethod() {
         the liquid at 95 % solid is the &ldquo;last liquid&rdquo; plotted below.
       </p>
       <p>
-        The λ2 fit was made on steels up to about 1 % C; above that its carbon term bends down sharply, so for display the carbon term is
-        held at its 1 % C value (our choice, flagged on the page).
+        The λ2 fit was made on steels up to about 1 % C; above that its carbon term bends down sharply, so the carbon term is held at its
+        1 % C value, both in the chart and in the back-diffusion estimate (our choice, flagged on the page).
       </p>
       <h3>Coarse primary carbides</h3>
       <p>
@@ -64,8 +64,9 @@ export function IngotMethod() {
       <h3>What the model leaves out</h3>
       <p>
         Fluid flow and settling of crystals, shrinkage and the air gap at the mould wall, the difference between solid and liquid
-        properties, δ-ferrite and peritectic reactions, and any carbide that would cap the liquid&rsquo;s enrichment. The centre point
-        collects all solute left in the last liquid and is therefore exaggerated.
+        properties, δ-ferrite and peritectic reactions, and any carbide that would cap the liquid&rsquo;s enrichment earlier. The one cap
+        kept is the iron–carbon eutectic: once the liquid reaches 4.3 % C, what is left freezes at its own composition. Chromium,
+        vanadium and molybdenum lower that limit in real steels, so the centre&rsquo;s enrichment is an upper bound.
       </p>
       <h3>Sources</h3>
       <ul>

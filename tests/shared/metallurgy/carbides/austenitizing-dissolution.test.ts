@@ -1,10 +1,18 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { InputError } from "@shared/metallurgy/errors";
-import { DEFAULT_DISSOLUTION_WINDOWS, dissolvedFractionsForAustenitizing, hardenedState } from "@shared/metallurgy/carbides";
+import {
+  allocateCarbides,
+  chromiumAcmWarning,
+  DEFAULT_DISSOLUTION_WINDOWS,
+  dissolvedFractionsForAustenitizing,
+  hardenedState,
+  HIGH_SPEED_STEEL_WARNING,
+} from "@shared/metallurgy/carbides";
+import { martensitePlateauHardnessHrc } from "@shared/metallurgy/hardening";
 
 const within = (actual: number, expected: number, tol: number) => expect(Math.abs(actual - expected)).toBeLessThanOrEqual(tol);
-const solutionCarbon = (comp: { C: number; Cr?: number }, tempC: number) =>
+const solutionCarbon = (comp: Record<string, number> & { C: number }, tempC: number) =>
   hardenedState(comp, { dissolvedFraction: dissolvedFractionsForAustenitizing(comp, tempC).dissolvedFraction }).solution.carbonMassPct;
 
 describe("dissolvedFractionsForAustenitizing", () => {
@@ -44,6 +52,44 @@ describe("dissolvedFractionsForAustenitizing", () => {
 
   it("warns that Acm is binary Fe–C for alloyed cementite steels", () => {
     expect(dissolvedFractionsForAustenitizing({ C: 1.0, Cr: 1.45 }, 800).warnings.join(" ")).toMatch(/binary Fe–C/);
+  });
+
+  it("does not model chromium's effect on cementite dissolution, and says so", () => {
+    // No Cr correction to Acm exists in science-reference §5.2 (binary straight line only), so 52100-type
+    // (C 1.0, Cr 1.45) and plain Fe–1.0C get the same carbon in solution: both are fully dissolved above
+    // Acm(1.0) = 799.3 °C ([Computed] §5.2 check 4), and at 780 °C both sit on the same Acm line.
+    for (const tempC of [780, 845]) within(solutionCarbon({ C: 1.0, Cr: 1.45 }, tempC), solutionCarbon({ C: 1.0 }, tempC), 0.002);
+    within(solutionCarbon({ C: 1.0, Cr: 1.45 }, 845), 1.0, 1e-9);
+    const r = dissolvedFractionsForAustenitizing({ C: 1.0, Cr: 1.45, Mn: 0.35, Si: 0.25 }, 845);
+    const text = r.warnings.join(" ");
+    expect(text).toMatch(/Chromium's effect on cementite dissolution is not modelled/);
+    expect(text).toMatch(/binary Fe–C/);
+    // It quotes the cementite Cr share of CARB-1, y3 = 0.063 ([Computed] §2.2 check 2), and Andrews' Ac1 term (§5.2 [Mem]).
+    expect(text).toMatch(/0\.063 of its metal sites/);
+    expect(text).toMatch(/Ac1 \+16\.9 °C per % Cr/);
+    expect(r.warnings).toContain(chromiumAcmWarning(1.45, 0.063));
+    // A plain-carbon steel gets no chromium warning.
+    expect(dissolvedFractionsForAustenitizing({ C: 0.95, Mn: 0.4 }, 800).warnings.join(" ")).not.toMatch(/Chromium/);
+  });
+
+  it("warns that the high-speed-steel carbon in solution (and hardness) reads low", () => {
+    // Trace of M2-type (C 0.85, Cr 4.1, Mo 5.0, W 6.4, V 1.9) from 1200 °C. Allocation [Computed] §2.2 check 6:
+    // C in MC 0.392, in M6C 0.348, in M23C6 0.110 %. [App] windows dissolve 15 % MC, 40 % M6C, all M23C6,
+    // releasing 0.308 % C into ≈ 88 % austenite → 0.350 % C in solution; the A255 polynomial (§2.3, [Checked])
+    // gives 53.4 HRC for it. Hardened and tempered M2 is typically 63–66 HRC with ≈ 0.5 % C in solution (from memory).
+    const comp = { C: 0.85, Cr: 4.1, Mo: 5.0, W: 6.4, V: 1.9 };
+    const annealed = allocateCarbides(comp);
+    const carbonIn = (type: string) => annealed.phases.find((p) => p.type === type)!.elements.C;
+    within(carbonIn("MC"), 0.392, 0.001);
+    within(carbonIn("M6C"), 0.348, 0.001);
+    within(carbonIn("M23C6"), 0.110, 0.001);
+    within(solutionCarbon(comp, 1200), 0.35, 0.002);
+    within(martensitePlateauHardnessHrc(solutionCarbon(comp, 1200)).value, 53.4, 0.1);
+    const r = dissolvedFractionsForAustenitizing(comp, 1200);
+    expect(r.warnings).toContain(HIGH_SPEED_STEEL_WARNING);
+    expect(HIGH_SPEED_STEEL_WARNING).toMatch(/0\.35 % C and 53 HRC/);
+    // Steels without M6C do not get it.
+    expect(dissolvedFractionsForAustenitizing({ C: 1.075, Cr: 17, Mo: 0.5 }, 1050).warnings).not.toContain(HIGH_SPEED_STEEL_WARNING);
   });
 
   it("never decreases with temperature and stays within 0–1", () => {

@@ -1,5 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { eutecticCarbideSizeUm, secondaryArmSpacingUm } from "../../../../shared/metallurgy/solidification/arm-spacing";
+import {
+  ARM_SPACING_FIT_MAX_CARBON_MASS_PCT,
+  armSpacingCarbonClampWarning,
+  armSpacingUnchecked,
+  eutecticCarbideSizeUm,
+  secondaryArmSpacingUm,
+} from "../../../../shared/metallurgy/solidification/arm-spacing";
 import { InputError } from "../../../../shared/metallurgy/errors";
 
 describe("secondary dendrite arm spacing (Won & Thomas 2001)", () => {
@@ -30,6 +36,28 @@ describe("secondary dendrite arm spacing (Won & Thomas 2001)", () => {
     // §3.4: 0.8 % C gives a larger λ2 than 1.0 % C
     expect(secondaryArmSpacingUm(1, 0.8).value).toBeGreaterThan(secondaryArmSpacingUm(1, 1.0).value);
     expect(secondaryArmSpacingUm(1, 1.2).warnings.join(" ")).toMatch(/above 1.0 %/);
+  });
+
+  it("holds the carbon term at its 1.0 % value above the fit's calibration limit, with a warning", () => {
+    // Calibration limit: science-reference §3.4 ("warn C > 1.0"). Above it the value equals the
+    // C = 1.0 fit value, [Computed] §3.4 check 2: CR 1 → 143.90 µm, CR 0.1 → 330.87 µm (±0.01).
+    for (const c of [1.2, 2.45, 3.0]) {
+      expect(Math.abs(secondaryArmSpacingUm(1, c).value - 143.9)).toBeLessThan(0.01);
+      expect(Math.abs(secondaryArmSpacingUm(0.1, c).value - 330.87)).toBeLessThan(0.01);
+      expect(armSpacingUnchecked(1, c)).toBe(secondaryArmSpacingUm(1, c).value); // the ingot solver uses the same value
+    }
+    expect(ARM_SPACING_FIT_MAX_CARBON_MASS_PCT).toBe(1.0);
+    const a11 = secondaryArmSpacingUm(0.1, 2.45);
+    expect(a11.warnings.at(-1)).toBe(armSpacingCarbonClampWarning(2.45));
+    expect(a11.warnings.at(-1)).toMatch(/held at the 1\.0 % value/);
+    // The literal fit at 2.45 % C: 143.9·CR^−0.3616·2.45^(0.5501 − 1.996·2.45) (Won & Thomas 2001, §3.4) —
+    // the carbon term is 0.02046, so dendrites 49 times finer (≈ 6.8 µm at 0.1 °C/s), which the warning names.
+    const literal = 143.9 * Math.pow(0.1, -0.3616) * Math.pow(2.45, 0.5501 - 1.996 * 2.45);
+    expect(literal).toBeCloseTo(6.77, 2);
+    expect(a11.warnings.at(-1)).toMatch(/49 times finer/);
+    // At and below 1.0 % C the published fit applies unchanged, without the carbon warning.
+    expect(secondaryArmSpacingUm(1, 1.0).warnings).toEqual([]);
+    expect(secondaryArmSpacingUm(1, 0.8).warnings).toEqual([]);
   });
 
   it("estimates carbide size as 0.3·λ2 (powder ≈ 0.5–3 µm)", () => {

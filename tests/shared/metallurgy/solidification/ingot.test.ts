@@ -12,7 +12,7 @@ import type { IngotParams } from "../../../../shared/metallurgy/solidification/i
 import { erf } from "../../../../shared/metallurgy/solidification/erf";
 import { neumannLambda, stefanNumber } from "../../../../shared/metallurgy/solidification/neumann";
 import { explicitStableTimeStepS } from "../../../../shared/metallurgy/solidification/conduction-stability";
-import { secondaryArmSpacingUm } from "../../../../shared/metallurgy/solidification/arm-spacing";
+import { armSpacingCarbonClampWarning, secondaryArmSpacingUm } from "../../../../shared/metallurgy/solidification/arm-spacing";
 import { InputError, StabilityError } from "../../../../shared/metallurgy/errors";
 
 // Default steel properties: k 30 W/mK, ρ 7400 kg/m³, c 680 J/kgK [Mem] (science-reference §3.6)
@@ -259,6 +259,122 @@ describe("ingot segregation profile", () => {
         const expected = microsegregation === "scheil" ? k * mean * Math.pow(0.1, k - 1) : (k * mean) / (1 - (1 - k) * 0.9);
         expect(s.interdendriticMassPct[15]).toBeCloseTo(expected, 12);
       }
+    }
+  });
+});
+
+describe("ingot segregation: the last liquid and its eutectic bound", () => {
+  // Slab, 1 °C freezing range (sharp front), perfect mixing (δ = 0): node i freezes at ingot solid
+  // fraction g = x_i/L, so the profile is ingot-scale Scheil, k·C0·(1 − g)^(k − 1) (science-reference §3.1).
+  const sharp = (cells: number, eutecticCarbonMassPct?: number) => {
+    const state = createIngot({
+      halfThicknessM: 0.1,
+      cells,
+      pourTempC: 1500,
+      liquidusTempC: 1500,
+      solidusTempC: 1499,
+      composition: { C: 1.0, V: 1 },
+      trackedElements: ["C", "V"],
+      wall: { type: "mould", mould: "metal" },
+      boundaryLayerM: 0,
+      eutecticCarbonMassPct,
+    });
+    runIngotUntilSolid(state);
+    return state;
+  };
+  // Scheil liquid fraction when C_L reaches C_E = 4.30 (Fe–C eutectic, §5.2 [Checked]) from C0 = 1.0, k 0.34:
+  // f_L = (C_E/C0)^(1/(k − 1)) = 0.1097 (science-reference §3.1 check 6 [Computed]).
+  const fLiquidAtEutectic = Math.pow(4.3 / 1.0, 1 / (0.34 - 1));
+
+  it("without a bound the last node takes C0·(V_node/V)^(k − 1): a spike that grows with the grid", () => {
+    // Closed form: with a sharp front the last node (volume fraction f) holds the solute of the last
+    // liquid, C0·f^k (Scheil, §3.1), so its mean is C0·f^(k − 1): 20.9 / 33.0 / 52.2 × C0 for 51 / 101 / 201
+    // nodes (f = 0.5/(cells − 1)). This is the old centre spike: real, but grid-dependent.
+    for (const cells of [51, 101, 201]) {
+      const state = sharp(cells, Infinity);
+      const c = state.solutes[0];
+      const f = state.volume[cells - 1] / state.totalVolume;
+      const closedForm = 1.0 * Math.pow(f, 0.34 - 1);
+      expect(Math.abs(c.meanMassPct[cells - 1] - closedForm) / closedForm).toBeLessThan(0.06);
+      expect(state.eutecticSolidFraction).toBeNull();
+      expect(Math.abs(ingotSoluteBalanceResidual(state, "C"))).toBeLessThan(1e-12);
+    }
+  });
+
+  it("freezes the liquid left at the Fe–C eutectic at its own composition: Scheil before, a plateau after", () => {
+    const state = sharp(101);
+    const [c, v] = state.solutes;
+    // The eutectic is reached at g* = 1 − 0.1097 (§3.1 check 6); tolerance half a node.
+    expect(Math.abs(state.eutecticSolidFraction! - (1 - fLiquidAtEutectic))).toBeLessThan(0.005);
+    expect(state.warnings.join(" ")).toMatch(/eutectic carbon \(4\.3 % C\) with 11 % of the section still liquid/);
+    for (const g of [0.5, 0.8, 0.85]) {
+      const i = Math.round(g * (state.cells - 1));
+      for (const s of [c, v]) {
+        const scheil = s.partitionCoefficient * s.nominalMassPct * Math.pow(1 - g, s.partitionCoefficient - 1);
+        expect(Math.abs(s.meanMassPct[i] - scheil) / scheil).toBeLessThan(0.02);
+      }
+    }
+    // After g*: C at C_E; V at the Scheil pool of that moment, C0_V·f_L^(k_V − 1) = 0.1097^(−0.4) = 2.4206 (§3.1).
+    const vPlateau = Math.pow(fLiquidAtEutectic, 0.6 - 1);
+    expect(vPlateau).toBeCloseTo(2.4206, 4);
+    // (1e-3: the 1 °C range leaves a mushy zone of a few nodes, so a node just past g* holds a little earlier solid.)
+    for (const g of [0.92, 0.95, 0.99, 1]) {
+      const i = Math.round(g * (state.cells - 1));
+      expect(Math.abs(c.meanMassPct[i] - 4.3) / 4.3).toBeLessThan(1e-3);
+      expect(Math.abs(v.meanMassPct[i] - vPlateau) / vPlateau).toBeLessThan(1e-3);
+    }
+    for (const s of [c, v]) expect(Math.abs(ingotSoluteBalanceResidual(state, s.element))).toBeLessThan(1e-12);
+  });
+
+  it("the bounded centre no longer depends on the grid", () => {
+    const coarse = sharp(51).solutes[0];
+    const fine = sharp(201).solutes[0];
+    expect(coarse.meanMassPct[50]).toBeCloseTo(4.3, 6);
+    expect(fine.meanMassPct[200]).toBeCloseTo(4.3, 6);
+  });
+
+  it("conserves every solute and stays at or below the eutectic carbon in a cylinder with a mushy zone", () => {
+    // The simulation's case: round ingot, sand mould (wide mushy zone), perfect mixing.
+    const state = createIngot({
+      geometry: "cylinder",
+      halfThicknessM: 0.15,
+      cells: 50,
+      pourTempC: 1500,
+      composition: { C: 0.95, Mn: 0.4, Cr: 1.5, V: 0.5 },
+      wall: { type: "mould", mould: "sand" },
+      boundaryLayerM: 0,
+    });
+    runIngotUntilSolid(state);
+    expect(state.eutecticSolidFraction).not.toBeNull();
+    const n = state.cells;
+    for (const s of state.solutes) {
+      expect(Math.abs(ingotSoluteBalanceResidual(state, s.element))).toBeLessThan(1e-12);
+      let sum = 0;
+      for (let i = 0; i < n; i++) sum += s.meanMassPct[i] * state.volume[i];
+      expect(Math.abs(sum / state.totalVolume - s.nominalMassPct) / s.nominalMassPct).toBeLessThan(1e-12);
+      // No spike: the centre node is within 1 % of its neighbour (it was about 3× before the bound).
+      expect(s.meanMassPct[n - 1] / s.meanMassPct[n - 2]).toBeLessThan(1.01);
+    }
+    const carbon = state.solutes.find((s) => s.element === "C")!;
+    for (const m of carbon.meanMassPct) expect(m).toBeLessThanOrEqual(4.3 + 1e-9);
+  });
+
+  it("warns when no carbon is tracked (nothing bounds the last liquid) and rejects a hyper-eutectic melt", () => {
+    const noCarbon = createIngot({ halfThicknessM: 0.05, cells: 21, pourTempC: 1540, composition: { Cr: 13, C: 0.3 }, trackedElements: ["Cr"] });
+    expect(noCarbon.warnings.join(" ")).toMatch(/Carbon is not tracked/);
+    const withCarbon = createIngot({ halfThicknessM: 0.05, cells: 21, pourTempC: 1540, composition: { Cr: 13, C: 0.3 } });
+    expect(withCarbon.warnings.join(" ")).not.toMatch(/Carbon is not tracked/);
+    expect(() => createIngot({ halfThicknessM: 0.05, pourTempC: 1500, liquidusTempC: 1200, solidusTempC: 1150, composition: { C: 4.3 } })).toThrow(InputError);
+    expect(() => createIngot({ halfThicknessM: 0.05, pourTempC: 1500, composition: { C: 1 }, eutecticCarbonMassPct: 0.9 })).toThrow(/eutecticCarbonMassPct/);
+  });
+
+  it("uses the clamped λ2 above 1 % C for back-diffusion and says so", () => {
+    // Won & Thomas fit above its 1.0 % C limit: carbon term held at 1.0 (science-reference §3.4; see arm-spacing.ts).
+    const state = createIngot({ halfThicknessM: 0.05, cells: 31, pourTempC: 1480, composition: { C: 2.45, V: 9.75, Cr: 5.25 }, wall: { type: "mould", mould: "metal" } });
+    expect(state.warnings).toContain(armSpacingCarbonClampWarning(2.45));
+    runIngotUntilSolid(state);
+    for (let i = 1; i < state.cells; i++) {
+      expect(state.armSpacingUm[i]).toBeCloseTo(secondaryArmSpacingUm(state.coolingRateCPerS[i], 1.0).value, 10);
     }
   });
 });
