@@ -55,8 +55,8 @@ const HOME_CHECKS: Record<DemoRole, { heading: RegExp; check: (page: Page) => Pr
     async check(page) {
       const row = page.getByRole("row", { name: /Autumn Forge Cohort/ });
       await row.waitFor();
-      // The seed puts the demo student and eight others in this instructor's cohort.
-      await expect(row.getByRole("cell").first().textContent()).resolves.toBe("9");
+      // The seed puts the demo student and twelve others in this instructor's cohort.
+      await expect(row.getByRole("cell").first().textContent()).resolves.toBe("13");
       // The other instructor's cohort is not listed.
       await expect(page.getByRole("row", { name: /Weekend Bladesmiths/ }).count()).resolves.toBe(0);
     },

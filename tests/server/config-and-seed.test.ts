@@ -55,7 +55,7 @@ describe("demo school seed", () => {
   });
   afterAll(() => t?.cleanup());
 
-  it("creates the Cinderfield Forge School: 1 admin, 2 instructors, 13 students, 2 cohorts, 6 modules", async () => {
+  it("creates the Cinderfield Forge School: 1 admin, 2 instructors, 17 students, 2 cohorts, 6 modules", async () => {
     const { User, Cohort, Module, Enrollment, Assignment, LessonProgress } = t.db.models;
     expect(await User.count({ where: { role: "admin" } })).toBe(1);
     expect(await User.count({ where: { role: "instructor" } })).toBe(2);
@@ -69,7 +69,7 @@ describe("demo school seed", () => {
       "powder-route",
       "choosing-and-treating",
     ]);
-    expect(await Enrollment.count()).toBeGreaterThanOrEqual(13);
+    expect(await Enrollment.count()).toBeGreaterThanOrEqual(17);
     const dues = (await Assignment.findAll()).map((a) => a.dueAt.getTime());
     expect(dues.filter((d) => d < Date.now())).toHaveLength(1); // exactly one overdue
     expect(await LessonProgress.count({ where: { completedAt: { [Op.ne]: null } } })).toBeGreaterThan(0);
@@ -88,19 +88,19 @@ describe("demo school seed", () => {
     const i = (await instructor.agent.get("/api/me/summary").expect(200)).body;
     expect(i).toEqual({
       role: "instructor",
-      cohorts: [{ id: expect.any(Number), name: "Autumn Forge Cohort", studentCount: 9, assignmentCount: 3, archived: false }],
+      cohorts: [{ id: expect.any(Number), name: "Autumn Forge Cohort", studentCount: 13, assignmentCount: 3, archived: false }],
     });
     await signIn(t.app, DEMO.instructor2.email);
 
     const admin = await signIn(t.app, DEMO.admin.email);
     const a = (await admin.agent.get("/api/me/summary").expect(200)).body;
-    expect(a.counts).toMatchObject({ users: 16, students: 13, instructors: 2, admins: 1, cohorts: 2, activeCohorts: 2 });
+    expect(a.counts).toMatchObject({ users: 20, students: 17, instructors: 2, admins: 1, cohorts: 2, activeCohorts: 2 });
   });
 
   it("does not seed again when users exist", async () => {
     const { seedDemoIfEmpty } = await import("../../server/db/seed/demo");
     expect(await seedDemoIfEmpty(t.db, t.logger)).toBe(false);
-    expect(await t.db.models.User.count()).toBe(16);
+    expect(await t.db.models.User.count()).toBe(20);
   });
 
   it("SEED_DEMO=0 leaves the database empty (no default admin)", async () => {
