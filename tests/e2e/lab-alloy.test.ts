@@ -66,7 +66,7 @@ describe("alloy explorer", () => {
     await page.reload();
     const list = page.getByRole("list", { name: "Your saved alloys" });
     await list.getByRole("listitem").filter({ hasText: name }).waitFor();
-    await expect(list.textContent()).resolves.toMatch(/2\.45 C, 5\.25 Cr, 9\.75 V/);
+    await expect(list.textContent()).resolves.toMatch(/2\.45\sC, 5\.25\sCr, 9\.75\sV/);
 
     // Opening it puts it into the comparison.
     await page.getByRole("button", { name: `Open ${name}` }).click();

@@ -62,7 +62,7 @@ describe("alloys attached to a lesson task", () => {
     const panel = taskPanel(sp);
     await panel.waitFor();
     await expect(panel.textContent()).resolves.toContain(NOTE);
-    await expect(panel.textContent()).resolves.toMatch(/1\.1 C, 12\.5 Cr, 0\.3 V, 0\.8 Mo/);
+    await expect(panel.textContent()).resolves.toMatch(/1\.1\sC, 12\.5\sCr, 0\.3\sV, 0\.8\sMo/);
     // Only the owner may remove it.
     expect(await panel.getByRole("button", { name: "Remove from this lesson" }).count()).toBe(0);
 

@@ -52,8 +52,9 @@ export function formatMassPct(value: number): string {
   return `${value.toFixed(decimals)} %`;
 }
 
-/** "1.05 C, 14 Cr, 4 Mo": the elements present, in the explorer's order; "pure iron" when none. */
+/** "1.05 C, 14 Cr, 4 Mo": the elements present, in the explorer's order; "pure iron" when none.
+ * A no-break space keeps each number with its element when the line wraps. */
 export function compositionText(composition: Partial<Record<(typeof ALLOY_ELEMENTS)[number], number>>): string {
-  const parts = ALLOY_ELEMENTS.filter((el) => (composition[el] ?? 0) > 0).map((el) => `${composition[el]} ${el}`);
+  const parts = ALLOY_ELEMENTS.filter((el) => (composition[el] ?? 0) > 0).map((el) => `${composition[el]}\u00a0${el}`);
   return parts.length ? parts.join(", ") : "pure iron";
 }

@@ -400,14 +400,4 @@ describe("ingot solver: geometry, run helper and cost", () => {
     expect(r.timeS).toBeLessThan(10 + state.maxStableDtS);
     expect(() => runIngotUntilSolid(state, { dtS: 10 * state.maxStableDtS })).toThrow(StabilityError);
   });
-
-  it("one step with 400 cells and 5 solutes costs far below 4 ms", () => {
-    const state = createIngot({ halfThicknessM: 0.1, cells: 400, pourTempC: 1520, composition: { C: 1, Cr: 1.5, V: 0.3, Mn: 0.4, Si: 0.3 }, wall: { type: "mould", mould: "metal" } });
-    const dt = 0.9 * state.maxStableDtS;
-    for (let i = 0; i < 500; i++) stepIngot(state, dt);
-    const start = performance.now();
-    for (let i = 0; i < 2000; i++) stepIngot(state, dt);
-    const perStepMs = (performance.now() - start) / 2000;
-    expect(perStepMs).toBeLessThan(0.5); // measured ≈ 0.03 ms; generous bound for a loaded CI machine
-  });
 });

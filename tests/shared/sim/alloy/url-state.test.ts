@@ -111,7 +111,7 @@ describe("links that open alloys in the explorer (lesson task alloys)", () => {
   });
 
   it("writes a composition as the elements present, in the explorer's order", () => {
-    expect(compositionText({ Mo: 4, C: 1.05, Cr: 14, V: 0 })).toBe("1.05 C, 14 Cr, 4 Mo");
+    expect(compositionText({ Mo: 4, C: 1.05, Cr: 14, V: 0 })).toBe("1.05\u00a0C, 14\u00a0Cr, 4\u00a0Mo");
     expect(compositionText({})).toBe("pure iron");
   });
 });
