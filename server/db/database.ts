@@ -6,6 +6,7 @@ import { defineModels, type Models } from "./models";
 import { applyPragmasToEveryConnection } from "./pragmas";
 import { runStartupChecks } from "./startup-checks";
 import { WriteQueue } from "./write-queue";
+import { shareOneWriterConnection } from "./writer-connection";
 
 /**
  * The data layer's front door. Routes and services use `db.read` / `db.write`, never
@@ -46,6 +47,7 @@ export async function openDatabase({ storage, logger }: OpenDatabaseOptions): Pr
     transactionType: Transaction.TYPES.IMMEDIATE,
   });
   applyPragmasToEveryConnection(sequelize);
+  shareOneWriterConnection(sequelize);
 
   try {
     const { sqliteVersion } = await runStartupChecks(sequelize);

@@ -1,5 +1,6 @@
 import { AsyncLocalStorage } from "node:async_hooks";
 import { Transaction, type Sequelize } from "sequelize";
+import { asQueuedWrite } from "./writer-connection";
 
 /**
  * The single in-process write queue. SQLite allows one writer at a time; letting transactions
@@ -31,7 +32,7 @@ export class WriteQueue {
 
     this.waiting += 1;
     const task = this.tail.then(() =>
-      this.sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, (t) => this.current.run(t, () => fn(t))),
+      asQueuedWrite(() => this.sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, (t) => this.current.run(t, () => fn(t)))),
     );
     const settled = task.finally(() => {
       this.waiting -= 1;
