@@ -11,6 +11,7 @@ export type ApiErrorCode =
   | "csrf_failed"
   | "invalid_credentials"
   | "storage_full"
+  | "storage_unavailable"
   | "internal_error"
   | "invalid_json"
   | "service_unavailable"
