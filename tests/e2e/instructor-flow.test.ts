@@ -48,6 +48,51 @@ async function check(page: Page, name: string, width: number) {
   expect(await seriousAxeViolations(page), name).toEqual([]);
 }
 
+/**
+ * The gradebook grows with the page (it used to scroll inside a 70vh box that cut off after about
+ * 9 rows with no sign of more): every student's row is in the page, the count says so, and the
+ * header row follows the page down to the last student.
+ */
+async function expectEveryStudentReachable(page: Page) {
+  const status = (await page.getByRole("status").filter({ hasText: /students shown/ }).textContent()) ?? "";
+  const [, shown, total] = status.match(/(\d+) of (\d+) students shown/) ?? [];
+  expect(Number(shown)).toBe(Number(total));
+  expect(Number(total)).toBeGreaterThan(9);
+  const box = page.getByRole("region", { name: /Gradebook table/ });
+  expect(await box.getByRole("row").count()).toBe(Number(total) + 1);
+  const innerScroll = await box.evaluate((el) => el.scrollHeight - el.clientHeight);
+  expect(innerScroll, "the gradebook must not scroll vertically inside its own box").toBeLessThanOrEqual(1);
+
+  // Scroll the page (not the box) to the last student: the row is on screen, the header above it.
+  const lastRow = box.getByRole("row").last();
+  await lastRow.evaluate((el) => el.scrollIntoView({ block: "end" }));
+  await page.evaluate(() => new Promise((resolve) => requestAnimationFrame(() => requestAnimationFrame(resolve))));
+  const viewportHeight = page.viewportSize()!.height;
+  const rowBox = (await lastRow.boundingBox())!;
+  expect(rowBox.y + rowBox.height).toBeLessThanOrEqual(viewportHeight + 1);
+  const siteHeaderBottom = await page.evaluate(() => document.querySelector("body header")!.getBoundingClientRect().bottom);
+  const headBox = (await box.getByRole("columnheader", { name: /Student/ }).boundingBox())!;
+  expect(headBox.y).toBeGreaterThanOrEqual(siteHeaderBottom - 1);
+  expect(headBox.y).toBeLessThan(siteHeaderBottom + 8);
+  expect(headBox.y + headBox.height).toBeLessThanOrEqual(rowBox.y + 1);
+  await page.evaluate(() => window.scrollTo(0, 0));
+}
+
+/** Question analytics: the most common wrong answers stay inside the panel at every width. */
+async function expectWrongAnswersInsidePanel(page: Page) {
+  const panel = page.getByRole("region", { name: "Question by question" });
+  const panelBox = (await panel.boundingBox())!;
+  const answers = panel.getByRole("listitem").filter({ hasText: /^\d+×/ });
+  expect(await answers.count()).toBeGreaterThan(0);
+  for (const answer of await answers.all()) {
+    const b = (await answer.boundingBox())!;
+    expect(b.x + b.width, `"${await answer.textContent()}" runs past the panel`).toBeLessThanOrEqual(panelBox.x + panelBox.width);
+    expect(await answer.isVisible()).toBe(true);
+  }
+  const overflow = await panel.evaluate((el) => [...el.querySelectorAll("*")].filter((e) => e.scrollWidth > e.clientWidth + 1 && getComputedStyle(e).overflowX !== "visible").length);
+  expect(overflow, "no part of the question panel scrolls sideways").toBe(0);
+}
+
 let cohortPath = "";
 let invitationLink = "";
 let submittedScore = { score: 0, maxScore: 0 };
@@ -175,6 +220,8 @@ describe("screens at desktop and phone width", () => {
       await page.goto(`${base}${cohortPath}/gradebook`);
       await page.getByRole("row", { name: new RegExp(NEW_STUDENT.name) }).waitFor();
       await page.getByRole("region", { name: "Question by question" }).getByText(/attempted it/).waitFor();
+      await expectEveryStudentReachable(page);
+      await expectWrongAnswersInsidePanel(page);
       await check(page, "teach-gradebook", viewport.width);
       expect(problems.pageErrors).toEqual([]);
       expect(problems.csp).toEqual([]);

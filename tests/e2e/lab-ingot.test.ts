@@ -65,6 +65,20 @@ describe("ingot simulation", () => {
     await context.close();
   });
 
+  it("opens a grade whose id looks like a number (?grade=1095) at that grade, without a preset error", async () => {
+    const { context, page, problems } = await openPage(browser);
+    await page.goto(`${server.baseUrl}/lab/ingot?grade=1095&sizeMm=200&element=C`);
+    const text = await waitForSummary(page, /200 mm ingot was fully solid/);
+    expect(text).toMatch(/C runs from/);
+    expect(await page.getByLabel("Steel", { exact: true }).inputValue()).toBe("1095");
+    // 1095 is a plain carbon steel: the composition boxes show its 0.95 % C and no chromium.
+    expect(await page.getByLabel("Carbon (C), exact value in %").inputValue()).toBe("0.95");
+    expect(Number(await page.getByLabel("Chromium (Cr), exact value in %").inputValue())).toBe(0);
+    expect(await page.getByText("The preset could not be used").count()).toBe(0);
+    expect(problems.pageErrors).toEqual([]);
+    await context.close();
+  });
+
   for (const viewport of [VIEWPORTS.desktop, VIEWPORTS.phone]) {
     it(`has no serious accessibility violations at ${viewport.width} px`, async () => {
       const { context, page, problems } = await openPage(browser, viewport);

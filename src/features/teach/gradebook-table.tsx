@@ -1,7 +1,9 @@
 /**
  * The gradebook table (TanStack Table): students × quizzes with best and latest score, attempts,
  * passed and overdue marks, completion; sortable columns, a text filter and an "overdue only"
- * filter, sticky header row and sticky name column inside its own scroll box (usable at phone width).
+ * filter. The table grows with the page, so every student is reached by scrolling the page; it
+ * scrolls sideways in its own box with the name column stuck at the left, and the header row
+ * follows the page scroll (use-following-header.ts says why this is not CSS sticky).
  */
 import { useId, useMemo, useState } from "react";
 import { Link } from "react-router";
@@ -19,6 +21,7 @@ import type { Gradebook, GradebookCell, GradebookQuiz, GradebookStudent } from "
 import { cx } from "@/components/ui/cx";
 import { percent } from "@/lib/format";
 import { teachPaths } from "./paths";
+import { useFollowingHeader } from "./use-following-header";
 import { inputClass } from "@/components/ui/form-classes";
 
 type ScoreView = "best" | "latest";
@@ -73,6 +76,7 @@ export function GradebookTable({ book }: { book: Gradebook }) {
   const [overdueOnly, setOverdueOnly] = useState(false);
   const [view, setView] = useState<ScoreView>("best");
   const filterId = useId();
+  const { boxRef, overflow } = useFollowingHeader<HTMLDivElement>();
   const overdueAssignments = new Set(book.assignments.filter((a) => a.overdue).map((a) => a.id));
 
   const columns = useMemo(
@@ -176,76 +180,91 @@ export function GradebookTable({ book }: { book: Gradebook }) {
       </div>
 
       <p className="mt-3 text-xs text-soot-600" role="status">
-        {rows.length} of {book.students.length} students shown. ✓ passed, ✗ not yet passed. Scores are shares of the quiz's marks.
+        <strong className="font-semibold text-soot-800">
+          {rows.length} of {book.students.length} students shown
+        </strong>
+        . ✓ passed, ✗ not yet passed. Scores are shares of the quiz's marks.
       </p>
+      {overflow.left || overflow.right ? (
+        <p className="mt-1 text-xs font-medium text-quench-700" aria-hidden="true">
+          {overflow.right ? "More quizzes to the right: scroll the table sideways →" : "← Scroll back for the first quizzes"}
+        </p>
+      ) : null}
 
-      <div className="mt-2 max-h-[70vh] relative overflow-auto rounded-lg border border-bone-300 bg-white shadow-card" tabIndex={0} role="region" aria-label="Gradebook table, scrolls in both directions">
-        <table className="w-max min-w-full border-separate border-spacing-0 text-left text-sm">
-          <caption className="sr-only">
-            Gradebook of {book.cohort.name}: one row per student, one column per quiz. Column headers sort the table.
-          </caption>
-          <thead>
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header, i) => {
-                  const sorted = header.column.getIsSorted();
-                  const quiz = quizById.get(header.column.id);
-                  return (
-                    <th
-                      key={header.id}
-                      scope="col"
-                      aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : "none"}
-                      className={cx(
-                        "sticky top-0 border-b border-bone-300 bg-bone-100 px-3 py-2 align-bottom font-semibold text-soot-800",
-                        i === 0 ? "left-0 z-30 w-36 min-w-36 border-r sm:w-52 sm:min-w-52" : "z-20",
-                        quiz ? "min-w-32 max-w-44" : "",
-                      )}
-                    >
-                      <button
-                        type="button"
-                        onClick={header.column.getToggleSortingHandler()}
-                        className="group inline-flex w-full items-end gap-1 text-left hover:text-soot-950"
+      <div className="relative isolate mt-2">
+        <div ref={boxRef} className="relative overflow-x-auto rounded-lg border border-bone-300 bg-white shadow-card" tabIndex={0} role="region" aria-label="Gradebook table, scrolls sideways">
+          <table className="w-max min-w-full border-separate border-spacing-0 text-left text-sm">
+            <caption className="sr-only">
+              Gradebook of {book.cohort.name}: one row per student, one column per quiz. Column headers sort the table.
+            </caption>
+            <thead>
+              {table.getHeaderGroups().map((group) => (
+                <tr key={group.id}>
+                  {group.headers.map((header, i) => {
+                    const sorted = header.column.getIsSorted();
+                    const quiz = quizById.get(header.column.id);
+                    return (
+                      <th
+                        key={header.id}
+                        scope="col"
+                        aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : "none"}
+                        style={{ transform: "translateY(var(--head-y, 0px))" }}
+                        className={cx(
+                          "border-b border-bone-300 bg-bone-100 px-3 py-2 align-bottom font-semibold text-soot-800",
+                          i === 0 ? "sticky left-0 z-30 w-36 min-w-36 border-r sm:w-52 sm:min-w-52" : "relative z-20",
+                          quiz ? "min-w-32 max-w-44" : "",
+                        )}
                       >
-                        <span className="min-w-0">
-                          <span className="line-clamp-2">{flexRender(header.column.columnDef.header, header.getContext())}</span>
-                          {quiz ? <span className="block text-2xs font-normal text-soot-600">pass {percent(quiz.passFraction)}</span> : null}
-                        </span>
-                        <span aria-hidden="true" className={cx("shrink-0 text-xs", sorted ? "text-ember-700" : "text-soot-500 opacity-0 group-hover:opacity-100")}>
-                          {sorted === "desc" ? "▼" : "▲"}
-                        </span>
-                      </button>
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {rows.length === 0 ? (
-              <tr>
-                <td colSpan={columns.length} className="px-3 py-6 text-center text-soot-600">
-                  {book.students.length === 0 ? "No students in this cohort yet." : "No student matches the filter."}
-                </td>
-              </tr>
-            ) : (
-              rows.map((row) => (
-                <tr key={row.id} className="group/row">
-                  {row.getVisibleCells().map((cell, i) => (
-                    <td
-                      key={cell.id}
-                      className={cx(
-                        "border-b border-bone-200 px-3 py-2 align-top group-hover/row:bg-bone-50",
-                        i === 0 ? "sticky left-0 z-10 w-36 min-w-36 max-w-36 border-r bg-white sm:w-52 sm:min-w-52 sm:max-w-52" : "bg-white",
-                      )}
-                    >
-                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                    </td>
-                  ))}
+                        <button
+                          type="button"
+                          onClick={header.column.getToggleSortingHandler()}
+                          className="group inline-flex w-full items-end gap-1 text-left hover:text-soot-950"
+                        >
+                          <span className="min-w-0">
+                            <span className="line-clamp-2">{flexRender(header.column.columnDef.header, header.getContext())}</span>
+                            {quiz ? <span className="block text-2xs font-normal text-soot-600">pass {percent(quiz.passFraction)}</span> : null}
+                          </span>
+                          <span aria-hidden="true" className={cx("shrink-0 text-xs", sorted ? "text-ember-700" : "text-soot-500 opacity-0 group-hover:opacity-100")}>
+                            {sorted === "desc" ? "▼" : "▲"}
+                          </span>
+                        </button>
+                      </th>
+                    );
+                  })}
                 </tr>
-              ))
-            )}
-          </tbody>
-        </table>
+              ))}
+            </thead>
+            <tbody>
+              {rows.length === 0 ? (
+                <tr>
+                  <td colSpan={columns.length} className="px-3 py-6 text-center text-soot-600">
+                    {book.students.length === 0 ? "No students in this cohort yet." : "No student matches the filter."}
+                  </td>
+                </tr>
+              ) : (
+                rows.map((row) => (
+                  <tr key={row.id} className="group/row">
+                    {row.getVisibleCells().map((cell, i) => (
+                      <td
+                        key={cell.id}
+                        className={cx(
+                          "border-b border-bone-200 px-3 py-2 align-top group-hover/row:bg-bone-50",
+                          i === 0 ? "sticky left-0 z-10 w-36 min-w-36 max-w-36 border-r bg-white sm:w-52 sm:min-w-52 sm:max-w-52" : "bg-white",
+                        )}
+                      >
+                        {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                      </td>
+                    ))}
+                  </tr>
+                ))
+              )}
+            </tbody>
+          </table>
+        </div>
+        {overflow.right ? (
+          // A fade at the right edge: more columns lie beyond it.
+          <div aria-hidden="true" className="pointer-events-none absolute inset-y-px right-px z-40 w-10 rounded-r-lg bg-linear-to-l from-soot-900/15 to-transparent" />
+        ) : null}
       </div>
     </div>
   );

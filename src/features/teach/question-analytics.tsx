@@ -1,6 +1,6 @@
 /**
  * Per-question analytics for one quiz: share of students whose latest attempt got each question
- * right (bar chart), and the most common wrong answers (table, which also carries the chart's numbers).
+ * right (bar chart), and the most common wrong answers (a list, which also carries the chart's numbers).
  */
 import { useId, useState } from "react";
 import { Bar, BarChart, CartesianGrid, Cell, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
@@ -12,6 +12,9 @@ import { selectClass } from "@/components/ui/form-classes";
 
 /** Below this share the question is flagged: most of the cohort got it wrong. */
 const WEAK = 0.5;
+
+/** Columns of one question row when its container is wide: number, question, share correct, wrong answers. */
+const ROW_GRID_WIDE = "gap-x-3 @2xl:grid-cols-[2.25rem_minmax(0,1.4fr)_4.5rem_minmax(0,1fr)]";
 
 /** The prompt as authors wrote it; drawn numbers ({name}) become "…". */
 const plainPrompt = (p: string) => p.replace(/\{[A-Za-z]\w*\}/g, "…").replace(/[*_`$]/g, "");
@@ -52,7 +55,7 @@ export function QuestionAnalytics({ quizzes }: { quizzes: QuizAnalytics[] }) {
           <figcaption className="text-sm font-semibold text-soot-900">Share correct, question by question</figcaption>
           <p className="text-xs text-soot-600">
             {weakest ? `Hardest: Q${quiz.questions.indexOf(weakest) + 1}, ${percent(weakest.correctShare)} correct. ` : ""}Bars below {percent(WEAK)} are in ember. The
-            same numbers are in the table below.
+            same numbers are in the list below.
           </p>
           <div className="mt-2" style={{ height: Math.max(140, data.length * 34 + 40) }} aria-hidden="true">
             <ResponsiveContainer width="100%" height="100%">
@@ -72,53 +75,46 @@ export function QuestionAnalytics({ quizzes }: { quizzes: QuizAnalytics[] }) {
         </figure>
       )}
 
-      <div className="relative overflow-x-auto" tabIndex={0} role="region" aria-label={`Questions of ${quiz.title}, scrolls sideways`}>
-        <table className="w-full min-w-[32rem] text-left text-sm">
-          <caption className="sr-only">Each question of {quiz.title}: share correct and the most common wrong answers</caption>
-          <thead className="text-soot-700">
-            <tr className="border-b border-bone-300">
-              <th scope="col" className="py-2 pr-3 font-semibold">
-                #
-              </th>
-              <th scope="col" className="py-2 pr-3 font-semibold">
-                Question
-              </th>
-              <th scope="col" className="py-2 pr-3 text-right font-semibold">
-                Correct
-              </th>
-              <th scope="col" className="py-2 font-semibold">
-                Most common wrong answers
-              </th>
-            </tr>
-          </thead>
-          <tbody className="divide-y divide-bone-200">
-            {quiz.questions.map((q, i) => (
-              <tr key={q.questionId} className="align-top">
-                <td className="py-2 pr-3 font-mono text-xs text-soot-600">Q{i + 1}</td>
-                <td className="max-w-md py-2 pr-3 text-soot-800">{plainPrompt(q.prompt)}</td>
-                <td className={cx("py-2 pr-3 text-right font-mono tabular-nums", q.correctShare !== null && q.correctShare < WEAK ? "font-semibold text-ember-700" : "")}>
-                  {percent(q.correctShare)}
-                  <span className="block text-2xs text-soot-600">
-                    {q.correct}/{q.answered}
-                  </span>
-                </td>
-                <td className="py-2">
-                  {q.commonWrong.length === 0 ? (
-                    <span className="text-soot-500">—</span>
-                  ) : (
-                    <ul className="space-y-0.5">
-                      {q.commonWrong.map((w) => (
-                        <li key={w.answer} className="text-soot-800">
-                          <span className="font-mono text-xs text-ember-700">{w.count}×</span> {w.answer}
-                        </li>
-                      ))}
-                    </ul>
-                  )}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+      {/* A list, not a table: at phone width (and in the half-width panel) a four-column table
+          pushed the wrong answers past the panel's edge. Narrow: the wrong answers stack under the
+          question; wide (container ≥ 42rem): they take a column, under a visual header row. */}
+      <div className="@container">
+        <div aria-hidden="true" className={cx("hidden border-b border-bone-300 py-2 text-sm font-semibold text-soot-700 @2xl:grid", ROW_GRID_WIDE)}>
+          <span>#</span>
+          <span>Question</span>
+          <span className="text-right">Correct</span>
+          <span>Most common wrong answers</span>
+        </div>
+        <ol aria-label={`Questions of ${quiz.title}: share correct and the most common wrong answers`} className="divide-y divide-bone-200">
+          {quiz.questions.map((q, i) => (
+            <li key={q.questionId} className={cx("grid grid-cols-[2.25rem_minmax(0,1fr)_auto] gap-x-3 gap-y-1.5 py-2.5 text-sm", ROW_GRID_WIDE)}>
+              <span className="pt-0.5 font-mono text-xs text-soot-600">Q{i + 1}</span>
+              <p className="text-soot-800">{plainPrompt(q.prompt)}</p>
+              <p className={cx("text-right font-mono tabular-nums", q.correctShare !== null && q.correctShare < WEAK ? "font-semibold text-ember-700" : "text-soot-900")}>
+                {percent(q.correctShare)}
+                <span className="block text-2xs font-normal whitespace-nowrap text-soot-600">
+                  {q.correct}/{q.answered} right
+                </span>
+              </p>
+              <div className="col-span-2 col-start-2 min-w-0 @2xl:col-span-1 @2xl:col-start-auto">
+                <p className="eyebrow text-2xs text-soot-600 @2xl:sr-only">Most common wrong answers</p>
+                {q.commonWrong.length === 0 ? (
+                  <p className="text-soot-600">
+                    —<span className="sr-only">none</span>
+                  </p>
+                ) : (
+                  <ul className="mt-0.5 space-y-0.5 @2xl:mt-0">
+                    {q.commonWrong.map((w) => (
+                      <li key={w.answer} className="break-words text-soot-800">
+                        <span className="font-mono text-xs text-ember-700">{w.count}×</span> {w.answer}
+                      </li>
+                    ))}
+                  </ul>
+                )}
+              </div>
+            </li>
+          ))}
+        </ol>
       </div>
     </div>
   );

@@ -1,7 +1,6 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { z } from "zod";
 import {
-  CARBIDE_PARAM_KEYS,
   carbideParamsSchema,
   currentEdgeMetrics,
   describeCarbides,
@@ -46,7 +45,7 @@ export interface CarbideSimulationProps {
 }
 
 function resolveInitial(initial: Record<string, unknown> | undefined): { params: CarbideParams; error: string | null } {
-  const raw = initial ?? readSearchParams(currentSearch(), CARBIDE_PARAM_KEYS, ["grade"]);
+  const raw = initial ?? readSearchParams(currentSearch(), carbideParamsSchema);
   const parsed = carbideParamsSchema.safeParse(raw);
   return parsed.success ? { params: parseCarbideParams(parsed.data), error: null } : { params: parseCarbideParams({}), error: z.prettifyError(parsed.error) };
 }

@@ -45,14 +45,13 @@ export interface IngotSimulationProps {
   onParamsChange?: (params: Record<string, unknown>) => void;
 }
 
-const PARAM_KEYS = ["grade", "C", "Cr", "V", "Mo", "Mn", "Si", "sizeMm", "mould", "mixing", "element"] as const;
 /** Real seconds the whole freeze takes to play at 1×. */
 const PLAYBACK_S = 20;
 const SPEEDS = [0.25, 0.5, 1, 2, 4] as const;
 const SUMMARY_INTERVAL_MS = 250;
 
 function resolveInitial(initial: Record<string, unknown> | undefined): { sim: ResolvedIngotSimParams; error: string | null } {
-  const raw = initial ?? readSearchParams(currentSearch(), PARAM_KEYS);
+  const raw = initial ?? readSearchParams(currentSearch(), paramsSchema);
   const parsed = paramsSchema.safeParse(raw);
   if (parsed.success) return { sim: resolveIngotSimParams(parsed.data), error: null };
   return { sim: resolveIngotSimParams(paramsSchema.parse({})), error: z.prettifyError(parsed.error) };

@@ -44,7 +44,7 @@ export interface PassiveFilmSimulationProps {
 
 /** Lesson preset (if any), else the page's URL search parameters, validated by the simulation's schema. */
 function resolveInitial(initial: Record<string, unknown> | undefined): { params: PassiveFilmParams; error: string | null } {
-  const raw = initial ?? readSearchParams(currentSearch(), Object.keys(PASSIVE_FILM_DEFAULTS));
+  const raw = initial ?? readSearchParams(currentSearch(), passiveFilmParamsSchema);
   const parsed = passiveFilmParamsSchema.safeParse(raw);
   return parsed.success ? { params: parsed.data, error: null } : { params: PASSIVE_FILM_DEFAULTS, error: z.prettifyError(parsed.error) };
 }

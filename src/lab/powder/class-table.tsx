@@ -1,9 +1,15 @@
 import type { PowderClasses } from "@shared/sim/powder/classes";
 import { formatNumber, formatScientific } from "@shared/sim/alloy/format";
+import { groupPowderWarnings } from "@shared/sim/powder/warnings";
 
 /** Per size class: mass, cooling rate, freezing time and distance, λ2 and carbide size. */
 export function ClassTable({ result }: { result: PowderClasses }) {
-  const warned = result.classes.some((c) => c.warnings.length > 0);
+  // Every distinct warning once, the classes it applies to named (most repeat in every class).
+  const warnings = groupPowderWarnings(
+    result.warnings,
+    result.classes.map((c) => ({ lowerUm: c.lowerM * 1e6, upperUm: c.upperM * 1e6, warnings: c.warnings })),
+    (um) => formatNumber(um, 2),
+  );
   return (
     <section aria-labelledby="powder-classes" className="rounded-md border border-bone-300 bg-white p-3">
       <h3 id="powder-classes" className="text-sm font-semibold text-soot-900">
@@ -44,10 +50,18 @@ export function ClassTable({ result }: { result: PowderClasses }) {
           </tbody>
         </table>
       </div>
-      {warned ? (
-        <p className="mt-2 text-xs text-soot-700">
-          Model warnings: {[...new Set(result.classes.flatMap((c) => c.warnings))].slice(0, 4).join(" ")}
-        </p>
+      {warnings.length > 0 ? (
+        <div className="mt-3 border-t border-bone-200 pt-2">
+          <h4 className="text-xs font-semibold text-soot-800">Model warnings ({warnings.length})</h4>
+          <ul className="mt-1 list-disc space-y-1 pl-4 text-xs text-soot-700">
+            {warnings.map((w) => (
+              <li key={w.message}>
+                {w.where ? <span className="font-semibold text-soot-800">{w.where.charAt(0).toUpperCase() + w.where.slice(1)}: </span> : null}
+                {w.message}
+              </li>
+            ))}
+          </ul>
+        </div>
       ) : null}
     </section>
   );

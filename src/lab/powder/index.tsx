@@ -32,7 +32,6 @@ export interface PowderSimulationProps {
   onParamsChange?: (params: Record<string, unknown>) => void;
 }
 
-const PARAM_KEYS = ["grade", "medianDiameterUm", "geometricStdDev", "gas", "gasVelocityMPerS", "superheatC", "undercoolingK", "hipPressureMPa", "hipTempC"] as const;
 const SPEEDS = [0.25, 0.5, 1, 2] as const;
 
 const MemoSizeHistogram = memo(SizeHistogram);
@@ -43,7 +42,7 @@ const MemoRouteComparison = memo(RouteComparisonPanel);
 const MemoPowderMethod = memo(PowderMethod);
 
 function resolveInitial(initial: Record<string, unknown> | undefined): { params: ResolvedPowderParams; error: string | null } {
-  const raw = initial ?? readSearchParams(currentSearch(), PARAM_KEYS);
+  const raw = initial ?? readSearchParams(currentSearch(), paramsSchema);
   const parsed = paramsSchema.safeParse(raw);
   if (parsed.success) return { params: resolvePowderParams(parsed.data), error: null };
   return { params: resolvePowderParams(paramsSchema.parse({})), error: z.prettifyError(parsed.error) };

@@ -1,21 +1,13 @@
+import type { z } from "zod";
+import { searchParamsToInput } from "@shared/sim/url-input";
+
 /**
  * Reads simulation parameters from the page's URL search string, so `/lab/passive-film?crMassPct=9`
- * opens at 9 % Cr. Values that look like numbers become numbers; `true`/`false` become booleans;
- * only the keys in `allowed` are read; keys listed in `strings` stay strings (e.g. a grade id "1095").
- * The simulation's zod schema validates the result.
+ * opens at 9 % Cr. Each value takes the type of its field in the simulation's schema (numbers
+ * for number fields, text for grade ids such as "1095"); the schema then validates the result.
  */
-export function readSearchParams(search: string, allowed: readonly string[], strings: readonly string[] = []): Record<string, unknown> {
-  const params = new URLSearchParams(search);
-  const out: Record<string, unknown> = {};
-  for (const key of allowed) {
-    const raw = params.get(key);
-    if (raw === null || raw === "") continue;
-    if (strings.includes(key)) out[key] = raw;
-    else if (/^-?\d+(\.\d+)?$/.test(raw)) out[key] = Number(raw);
-    else if (raw === "true" || raw === "false") out[key] = raw === "true";
-    else out[key] = raw;
-  }
-  return out;
+export function readSearchParams(search: string, schema: { shape: Record<string, z.ZodType> }): Record<string, unknown> {
+  return searchParamsToInput(search, schema);
 }
 
 /** The current window's search string, or "" outside a browser (e.g. in tests or when embedded). */
