@@ -27,11 +27,11 @@ export function formatNumber(value: number, digits = 3): string {
   return value.toLocaleString("en-GB", { maximumFractionDigits: decimals, minimumFractionDigits: 0 });
 }
 
-/** A power of ten in plain text, e.g. 3.2 × 10⁴. */
-export function formatScientific(value: number, digits = 2): string {
+/** A power of ten in plain text, e.g. 3.2 × 10⁴; values near 1 stay plain unless `always` (a column of them). */
+export function formatScientific(value: number, digits = 2, always = false): string {
   if (!Number.isFinite(value) || value === 0) return formatNumber(value);
   const exp = Math.floor(Math.log10(Math.abs(value)));
-  if (exp >= -2 && exp <= 3) return formatNumber(value, digits);
+  if (!always && exp >= -2 && exp <= 3) return formatNumber(value, digits);
   const mantissa = value / 10 ** exp;
   return `${mantissa.toFixed(digits - 1)} × 10${superscript(exp)}`;
 }

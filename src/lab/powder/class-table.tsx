@@ -19,6 +19,9 @@ export function ClassTable({ result }: { result: PowderClasses }) {
         λ2 from the cooling rate (a casting-data fit extrapolated far beyond its range, so read it as an order of magnitude); carbide size
         taken as 0.3 × λ2 (a model rule).
       </p>
+      <p className="mt-1 text-xs font-semibold text-quench-700 sm:hidden" aria-hidden="true">
+        Seven columns: scroll the table sideways →
+      </p>
       {/* Focusable so the table can be scrolled sideways with the keyboard on a phone. */}
       <div className="mt-2 overflow-x-auto" tabIndex={0} role="region" aria-label="Size-class table (scrolls sideways)">
         <table className="w-full min-w-[36rem] border-collapse text-right text-sm tabular-nums">
@@ -40,7 +43,7 @@ export function ClassTable({ result }: { result: PowderClasses }) {
                   {formatNumber(c.lowerM * 1e6, 2)}–{formatNumber(c.upperM * 1e6, 2)}
                 </th>
                 <td className="px-2">{formatNumber(c.massFraction * 100, 2)}</td>
-                <td className="px-2">{formatScientific(c.coolingRateKPerS)}</td>
+                <td className="px-2">{formatScientific(c.coolingRateKPerS, 2, true)}</td>
                 <td className="px-2">{Number.isFinite(c.freezingTimeS) ? formatNumber(c.freezingTimeS * 1000, 2) : "—"}</td>
                 <td className="px-2">{Number.isFinite(c.solidAtFallM) ? formatNumber(c.solidAtFallM * 100, 2) : "—"}</td>
                 <td className="px-2">{c.armSpacingUm !== null ? formatNumber(c.armSpacingUm, 2) : "—"}</td>
