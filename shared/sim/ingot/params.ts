@@ -39,8 +39,8 @@ export const paramsSchema = z.strictObject({
   mould: z.enum(MOULDS).default(INGOT_SIM_DEFAULTS.mould),
   /** 0 = stagnant liquid ahead of the front, 1 = fully mixed liquid. */
   mixing: z.number().min(0).max(1).default(INGOT_SIM_DEFAULTS.mixing),
-  /** The element whose solute map and segregation profile are drawn. */
-  element: z.enum(INGOT_ELEMENTS).default(INGOT_SIM_DEFAULTS.element),
+  /** The element whose solute map and segregation profile are drawn; absent = defaultMapElement. */
+  element: z.enum(INGOT_ELEMENTS).optional(),
 });
 
 export type IngotSimParamsInput = z.input<typeof paramsSchema>;
@@ -57,9 +57,15 @@ export interface ResolvedIngotSimParams {
   element: IngotElement;
 }
 
+/** Vanadium's map when the steel carries enough to matter, else carbon's (a plain steel's V map is empty). */
+export function defaultMapElement(composition: Composition): IngotElement {
+  return (composition.V ?? 0) >= 0.1 ? INGOT_SIM_DEFAULTS.element : "C";
+}
+
 export function resolveIngotSimParams(params: IngotSimParams): ResolvedIngotSimParams {
   const { composition, gradeId } = resolveComposition(params, INGOT_ELEMENTS, DEFAULT_INGOT_GRADE);
-  return { composition, gradeId, sizeMm: params.sizeMm, mould: params.mould, mixing: params.mixing, element: params.element };
+  const element = params.element ?? defaultMapElement(composition);
+  return { composition, gradeId, sizeMm: params.sizeMm, mould: params.mould, mixing: params.mixing, element };
 }
 
 /** Parse untrusted input (a lesson preset, URL parameters); throws a ZodError when invalid. */

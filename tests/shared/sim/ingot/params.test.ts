@@ -25,6 +25,14 @@ describe("ingot parameters (contract with content/AUTHORING.md)", () => {
     expect(p.composition.Cr).toBe(11.5);
   });
 
+  it("maps vanadium by default only where the steel has some; a plain carbon steel opens on carbon", () => {
+    expect(parseIngotSimParams({ grade: "D2" }).element).toBe("V");
+    expect(parseIngotSimParams({ grade: "1095" }).element).toBe("C");
+    expect(parseIngotSimParams({ C: 1, Cr: 1.5 }).element).toBe("C");
+    // A chosen element always wins.
+    expect(parseIngotSimParams({ grade: "1095", element: "Mn" }).element).toBe("Mn");
+  });
+
   it("uses exactly the typed composition when elements are given without a grade", () => {
     const p = parseIngotSimParams({ C: 1, V: 4 });
     expect(p.composition).toEqual({ C: 1, V: 4 });
