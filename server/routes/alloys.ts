@@ -5,7 +5,6 @@ import {
   attachAlloyRequestSchema,
   createSavedAlloyRequestSchema,
   detachAlloyParamsSchema,
-  MAX_SAVED_ALLOYS_PER_USER,
   renameSavedAlloyRequestSchema,
   type AlloyComposition,
   type AttachedAlloy,
@@ -15,14 +14,16 @@ import {
 } from "../../shared/api/alloys";
 import { lessonParamsSchema } from "../../shared/api/lessons";
 import type { AppContext } from "../context";
-import { HttpError, notFound } from "../errors";
 import { currentUser, loadOwned, owned, requireAuth, requireRole } from "../middleware/authorize";
 import { validate } from "../middleware/validate";
+import type { Actor } from "../services/actor";
+import { attachAlloy, deleteAlloy, detachAlloy, ownsAlloy, renameAlloy, saveAlloy, type AttachAlloyInput } from "../services/alloys";
 import { getCourseCatalog } from "../services/lessons/course";
 import type { LessonAlloyInstance } from "../db/models/lesson-alloy";
 import type { SavedAlloyInstance } from "../db/models/saved-alloy";
 
 const iso = (d: Date | string) => new Date(d).toISOString();
+const actorOf = (req: Request): Actor => ({ user: currentUser(req), ip: req.ip });
 
 function toSavedAlloy(row: SavedAlloyInstance): SavedAlloy {
   return { id: row.id, name: row.name, composition: row.composition as AlloyComposition, createdAt: iso(row.createdAt), updatedAt: iso(row.updatedAt) };
@@ -46,16 +47,16 @@ function toAttachedAlloy(row: LessonAlloyInstance, viewerId: number): AttachedAl
 /**
  * /api/alloys: the signed-in user's saved alloys (list, create, rename, delete), and an
  * instructor attaching one of their own alloys to a lesson task. Another user's alloy answers
- * 404, as if it did not exist.
+ * 404, as if it did not exist. The writes and their rules are in server/services/alloys.ts.
  */
 export function createAlloysRouter(ctx: AppContext): Router {
   const router = Router();
-  const { SavedAlloy, LessonAlloy } = ctx.db.models;
+  const { SavedAlloy } = ctx.db.models;
   const idParams = validate({ params: alloyIdParamSchema });
   const ownAlloy = loadOwned<SavedAlloyInstance>(
     "alloy",
     (req: Request) => ctx.db.read(() => SavedAlloy.findByPk((req.params as unknown as { id: number }).id)),
-    (user, alloy) => alloy.userId === user.id,
+    ownsAlloy,
     "That saved alloy",
   );
 
@@ -67,32 +68,17 @@ export function createAlloysRouter(ctx: AppContext): Router {
   });
 
   router.post("/", requireAuth, validate({ body: createSavedAlloyRequestSchema }), async (req, res) => {
-    const { name, composition } = req.body as CreateSavedAlloyRequest;
-    const userId = currentUser(req).id;
-    const row = await ctx.db.write(async (transaction) => {
-      const count = await SavedAlloy.count({ where: { userId }, transaction });
-      if (count >= MAX_SAVED_ALLOYS_PER_USER) {
-        throw new HttpError(409, "conflict", `You can keep at most ${MAX_SAVED_ALLOYS_PER_USER} saved alloys; delete one first.`);
-      }
-      return SavedAlloy.create({ userId, name, composition: dropZeros(composition) }, { transaction });
-    });
+    const row = await saveAlloy(ctx.db, actorOf(req), req.body as CreateSavedAlloyRequest);
     res.status(201).json({ alloy: toSavedAlloy(row) });
   });
 
   router.patch("/:id", requireAuth, idParams, ownAlloy, validate({ body: renameSavedAlloyRequestSchema }), async (req, res) => {
-    const { name } = req.body as RenameSavedAlloyRequest;
-    const alloy = owned<SavedAlloyInstance>(res, "alloy");
-    const row = await ctx.db.write(async (transaction) => {
-      const fresh = await SavedAlloy.findByPk(alloy.id, { transaction });
-      if (!fresh) throw notFound("That saved alloy");
-      return fresh.update({ name }, { transaction });
-    });
+    const row = await renameAlloy(ctx.db, actorOf(req), owned<SavedAlloyInstance>(res, "alloy"), req.body as RenameSavedAlloyRequest);
     res.json({ alloy: toSavedAlloy(row) });
   });
 
-  router.delete("/:id", requireAuth, idParams, ownAlloy, async (_req, res) => {
-    const alloy = owned<SavedAlloyInstance>(res, "alloy");
-    await ctx.db.write((transaction) => SavedAlloy.destroy({ where: { id: alloy.id }, transaction }));
+  router.delete("/:id", requireAuth, idParams, ownAlloy, async (req, res) => {
+    await deleteAlloy(ctx.db, actorOf(req), owned<SavedAlloyInstance>(res, "alloy"));
     res.status(204).end();
   });
 
@@ -103,32 +89,22 @@ export function createAlloysRouter(ctx: AppContext): Router {
     ownAlloy,
     validate({ body: attachAlloyRequestSchema }),
     async (req, res) => {
-      const { lessonSlug, note } = req.body as { lessonSlug: string; note: string };
+      const actor = actorOf(req);
       const alloy = owned<SavedAlloyInstance>(res, "alloy");
-      const catalog = await getCourseCatalog();
-      if (!catalog.lessons.has(lessonSlug)) throw notFound("That lesson");
-      const attachedById = currentUser(req).id;
-      const [row, created] = await ctx.db.write(async (transaction) => {
-        const existing = await LessonAlloy.findOne({ where: { alloyId: alloy.id, lessonSlug }, transaction });
-        if (existing) return [await existing.update({ note, attachedById }, { transaction }), false] as const;
-        return [await LessonAlloy.create({ alloyId: alloy.id, lessonSlug, note, attachedById }, { transaction }), true] as const;
-      });
-      const full = await ctx.db.read(() => loadAttachment(ctx, row.id));
-      res.status(created ? 201 : 200).json({ attachment: toAttachedAlloy(full!, attachedById) });
+      const { attachment, created } = await attachAlloy(ctx.db, await getCourseCatalog(), actor, alloy, req.body as AttachAlloyInput);
+      const full = await ctx.db.read(() => loadAttachment(ctx, attachment.id));
+      res.status(created ? 201 : 200).json({ attachment: toAttachedAlloy(full!, actor.user.id) });
     },
   );
 
-  // Detaching is the owner's call, like attaching; the alloy itself stays saved.
   router.delete(
     "/:id/attach/:slug",
     requireRole("instructor", "admin"),
     validate({ params: detachAlloyParamsSchema }),
     ownAlloy,
     async (req, res) => {
-      const alloy = owned<SavedAlloyInstance>(res, "alloy");
       const lessonSlug = (req.params as unknown as { slug: string }).slug;
-      const removed = await ctx.db.write((transaction) => LessonAlloy.destroy({ where: { alloyId: alloy.id, lessonSlug }, transaction }));
-      if (removed === 0) throw notFound("That attachment");
+      await detachAlloy(ctx.db, actorOf(req), owned<SavedAlloyInstance>(res, "alloy"), lessonSlug);
       res.status(204).end();
     },
   );
@@ -163,9 +139,4 @@ function attachmentIncludes(ctx: AppContext) {
 
 function loadAttachment(ctx: AppContext, id: number) {
   return ctx.db.models.LessonAlloy.findOne({ where: { id: { [Op.eq]: id } }, include: attachmentIncludes(ctx) });
-}
-
-/** Zero means "none of this element"; store only what the alloy contains. */
-function dropZeros(composition: AlloyComposition): AlloyComposition {
-  return Object.fromEntries(Object.entries(composition).filter(([, v]) => typeof v === "number" && v > 0)) as AlloyComposition;
 }

@@ -3,7 +3,6 @@ import { Op } from "sequelize";
 import {
   entryParamsSchema,
   fileParamsSchema,
-  NOTEBOOK_LIMITS,
   notebookEntryInputSchema,
   reviewListQuerySchema,
   reviewRequestSchema,
@@ -15,30 +14,24 @@ import {
 import type { AppContext } from "../context";
 import type { NotebookEntryInstance } from "../db/models/notebook-entry";
 import type { NotebookFileInstance } from "../db/models/notebook-file";
-import { HttpError, notFound } from "../errors";
+import { notFound } from "../errors";
 import { currentUser, loadOwned, owned, requireAuth, requireRole } from "../middleware/authorize";
 import { validate } from "../middleware/validate";
 import { recordAudit } from "../services/audit";
-import {
-  canReadEntry,
-  canReviewEntry,
-  entryAttributes,
-  entryResponse,
-  resolveSteel,
-  summaryIncludes,
-  toComment,
-  toSummary,
-} from "../services/notebook";
+import type { Actor } from "../services/actor";
+import { canReadEntry, canReviewEntry, entryResponse, summaryIncludes, toComment, toSummary } from "../services/notebook";
+import { createEntry, ENTRY, reviewEntry, updateEntry } from "../services/notebook-entries";
 import { createNotebookFiles } from "../services/notebook-files";
 import { reviewNotifier } from "../services/notebook-mail";
 
-const ENTRY = "That notebook entry";
 const FILE = "That file";
+const actorOf = (req: Request): Actor => ({ user: currentUser(req), ip: req.ip });
 
 /**
  * /api/notebook: forge-notebook entries, their photos and PDFs, and instructors' reviews.
  * Access rules are in server/services/notebook.ts; denials of someone else's entry or file
- * answer 404. Upload handling is in server/services/notebook-files.ts and server/uploads/.
+ * answer 404. Entry and review writes are in server/services/notebook-entries.ts, upload handling
+ * in server/services/notebook-files.ts and server/uploads/.
  */
 export function createNotebookRouter(ctx: AppContext): Router {
   const router = Router();
@@ -75,16 +68,7 @@ export function createNotebookRouter(ctx: AppContext): Router {
   });
 
   router.post("/entries", requireAuth, validate({ body: notebookEntryInputSchema }), async (req, res) => {
-    const input = req.body as NotebookEntryInput;
-    const user = currentUser(req);
-    const steel = await db.read(() => resolveSteel(db, user.id, input.steel));
-    const row = await db.write(async (transaction) => {
-      const count = await NotebookEntry.count({ where: { userId: user.id }, transaction });
-      if (count >= NOTEBOOK_LIMITS.entriesPerUser) {
-        throw new HttpError(409, "conflict", `A notebook holds at most ${NOTEBOOK_LIMITS.entriesPerUser} entries; delete an old one first.`);
-      }
-      return NotebookEntry.create({ userId: user.id, ...entryAttributes(input, steel) }, { transaction });
-    });
+    const row = await createEntry(db, actorOf(req), req.body as NotebookEntryInput);
     await respondWithEntry(res, row.id, req, 201);
   });
 
@@ -93,16 +77,8 @@ export function createNotebookRouter(ctx: AppContext): Router {
   });
 
   router.put("/entries/:id", requireAuth, entryParams, ownEntry, validate({ body: notebookEntryInputSchema }), async (req, res) => {
-    const input = req.body as NotebookEntryInput;
     const entry = owned<NotebookEntryInstance>(res, "entry");
-    const steel = await db.read(() => resolveSteel(db, entry.userId, input.steel, entry));
-    await db.write(async (transaction) => {
-      const fresh = await NotebookEntry.findByPk(entry.id, { transaction });
-      if (!fresh) throw notFound(ENTRY);
-      // Changing an entry sent back for rework puts it in front of the instructor again.
-      const review = fresh.reviewStatus === "needs-rework" ? { reviewStatus: "unreviewed" as const } : {};
-      await fresh.update({ ...entryAttributes(input, steel), ...review }, { transaction });
-    });
+    await updateEntry(db, actorOf(req), entry, req.body as NotebookEntryInput);
     await respondWithEntry(res, entry.id, req);
   });
 
@@ -144,17 +120,10 @@ export function createNotebookRouter(ctx: AppContext): Router {
   // ---- review -------------------------------------------------------------------------------
 
   router.post("/entries/:id/review", requireRole("instructor", "admin"), entryParams, reviewableEntry, validate({ body: reviewRequestSchema }), async (req, res) => {
-    const { status, comment } = req.body as ReviewRequest;
     const entry = owned<NotebookEntryInstance>(res, "entry");
-    const reviewer = currentUser(req);
-    const commentId = await db.write(async (transaction) => {
-      const fresh = await NotebookEntry.findByPk(entry.id, { transaction });
-      if (!fresh) throw notFound(ENTRY);
-      const created = await NotebookComment.create({ entryId: entry.id, authorId: reviewer.id, body: comment, status, notification: "pending" }, { transaction });
-      await fresh.update({ reviewStatus: status, reviewedAt: new Date(), reviewedById: reviewer.id }, { transaction });
-      await recordAudit(db, { actorId: reviewer.id, action: "notebook.review", targetType: "notebook-entry", targetId: entry.id, details: { status, studentId: entry.userId }, ip: req.ip ?? null }, transaction);
-      return created.id;
-    });
+    const actor = actorOf(req);
+    const reviewer = actor.user;
+    const { id: commentId } = await reviewEntry(db, actor, entry, req.body as ReviewRequest);
     // After the commit: the e-mail goes out in the background (server/services/notebook-mail.ts).
     notifier.enqueue(commentId, `${req.protocol}://${req.host}`);
     const body = await db.read(() => entryResponse(db, entry.id, reviewer));

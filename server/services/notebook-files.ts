@@ -18,7 +18,7 @@ import type { NotebookEntryInstance } from "../db/models/notebook-entry";
 import type { InferCreationAttributes } from "sequelize";
 import type { NotebookFileInstance } from "../db/models/notebook-file";
 import { HttpError, notFound } from "../errors";
-import { detectUpload } from "../uploads/detect";
+import { detectUpload, type DetectedUpload } from "../uploads/detect";
 import { UploadGate } from "../uploads/gate";
 import { processImage } from "../uploads/images";
 import { createFileReceiver } from "../uploads/multipart";
@@ -42,6 +42,8 @@ export interface NotebookFiles {
 }
 
 type FileCreation = InferCreationAttributes<NotebookFileInstance>;
+/** A file row's columns that describe the stored bytes (the caller adds entryId and userId). */
+export type StoredFileAttrs = Omit<FileCreation, "entryId" | "userId" | "id" | "createdAt" | "updatedAt">;
 
 const MIB = 1024 * 1024;
 const mb = (bytes: number) => `${(bytes / MIB).toFixed(1)} MB`;
@@ -52,6 +54,54 @@ function quotaExceeded(usedBytes: number, quotaBytes: number): HttpError {
     "quota_exceeded",
     `Your notebook storage is full (${mb(usedBytes)} of ${mb(quotaBytes)} used). Delete photos or reports you no longer need, then try again.`,
   );
+}
+
+/**
+ * Steps 3 and 4 for bytes whose type is known: a photo is re-encoded with a thumbnail, a PDF is
+ * checked and kept as sent; the bytes go under new random names, each pushed to `written` as
+ * soon as it exists, so the caller can remove them if anything later fails. The directory must
+ * exist. Also used by the demo seed for its photos.
+ */
+export async function storeFileBytes(
+  store: UploadStore,
+  settings: UploadSettings,
+  buffer: Buffer,
+  detected: DetectedUpload,
+  originalName: string,
+  written: string[],
+): Promise<StoredFileAttrs> {
+  if (detected.kind === "image") {
+    const image = await processImage(buffer, detected.format, settings);
+    const main = await store.write(image.main.data, image.main.ext);
+    written.push(main);
+    const thumb = await store.write(image.thumb.data, "webp", { thumb: true, base: main.slice(0, 32) });
+    written.push(thumb);
+    return {
+      kind: "image",
+      mimeType: image.main.mimeType,
+      storedName: main,
+      thumbName: thumb,
+      originalName: displayName(originalName, image.main.ext),
+      sizeBytes: image.main.data.length,
+      thumbBytes: image.thumb.data.length,
+      width: image.main.width,
+      height: image.main.height,
+    };
+  }
+  checkPdf(buffer);
+  const name = await store.write(buffer, "pdf");
+  written.push(name);
+  return {
+    kind: "pdf",
+    mimeType: "application/pdf",
+    storedName: name,
+    thumbName: null,
+    originalName: displayName(originalName, "pdf"),
+    sizeBytes: buffer.length,
+    thumbBytes: 0,
+    width: null,
+    height: null,
+  };
 }
 
 export function createNotebookFiles(ctx: AppContext): NotebookFiles {
@@ -94,40 +144,7 @@ export function createNotebookFiles(ctx: AppContext): NotebookFiles {
         const detected = await detectUpload(received.buffer);
         await ensureDir();
 
-        let attrs: Omit<FileCreation, "entryId" | "userId" | "id" | "createdAt" | "updatedAt">;
-        if (detected.kind === "image") {
-          const image = await processImage(received.buffer, detected.format, settings);
-          const main = await store.write(image.main.data, image.main.ext);
-          written.push(main);
-          const thumb = await store.write(image.thumb.data, "webp", { thumb: true, base: main.slice(0, 32) });
-          written.push(thumb);
-          attrs = {
-            kind: "image",
-            mimeType: image.main.mimeType,
-            storedName: main,
-            thumbName: thumb,
-            originalName: displayName(received.originalName, image.main.ext),
-            sizeBytes: image.main.data.length,
-            thumbBytes: image.thumb.data.length,
-            width: image.main.width,
-            height: image.main.height,
-          };
-        } else {
-          checkPdf(received.buffer);
-          const name = await store.write(received.buffer, "pdf");
-          written.push(name);
-          attrs = {
-            kind: "pdf",
-            mimeType: "application/pdf",
-            storedName: name,
-            thumbName: null,
-            originalName: displayName(received.originalName, "pdf"),
-            sizeBytes: received.buffer.length,
-            thumbBytes: 0,
-            width: null,
-            height: null,
-          };
-        }
+        const attrs = await storeFileBytes(store, settings, received.buffer, detected, received.originalName, written);
         const newBytes = attrs.sizeBytes + attrs.thumbBytes;
 
         const row = await db.write(async (transaction) => {

@@ -1,14 +1,15 @@
 /**
- * The demo instructor's saved alloy, attached to the alloy-explorer task of the stainless lesson.
- * Written with the same schemas and steps as POST /api/alloys and POST /api/alloys/:id/attach
- * (server/routes/alloys.ts): zeros dropped, the lesson must exist in the course, one attachment
- * per alloy and lesson. The composition is invented: a 0.6 % C, 13.8 % Cr blade steel for
- * learners to set beside 440C and D2. It deliberately does NOT answer the lesson's task (how
- * much chromium D2's carbon needs), so the attachment gives nothing away.
+ * The demo instructor's saved alloy, attached to the alloy-explorer task of the stainless lesson,
+ * through the same schemas and services as POST /api/alloys and POST /api/alloys/:id/attach
+ * (server/services/alloys.ts); only the dates are moved back to the story's days afterwards.
+ * The composition is invented: a 0.6 % C, 13.8 % Cr blade steel for learners to set beside
+ * 440C and D2. It deliberately does NOT answer the lesson's task (how much chromium D2's carbon
+ * needs), so the attachment gives nothing away.
  */
-import { attachAlloyRequestSchema, createSavedAlloyRequestSchema, type AlloyComposition } from "../../../shared/api/alloys";
+import { attachAlloyRequestSchema, createSavedAlloyRequestSchema } from "../../../shared/api/alloys";
+import { attachAlloy, saveAlloy } from "../../services/alloys";
 import { DEMO_INSTRUCTORS } from "./demo-people";
-import type { SeedContext } from "./demo-context";
+import { backdate, historyActor, type SeedContext } from "./demo-context";
 
 export const DEMO_ALLOY = {
   name: "Cinderfield fine-carbide stainless",
@@ -19,17 +20,16 @@ export const DEMO_ALLOY = {
 
 export async function seedInstructorAlloy(s: SeedContext): Promise<boolean> {
   if (!s.catalog.lessons.has(DEMO_ALLOY.lessonSlug)) return false; // another course (test fixture)
-  const { SavedAlloy, LessonAlloy } = s.db.models;
-  const userId = s.userId(DEMO_INSTRUCTORS[0].email);
-  const { name, composition } = createSavedAlloyRequestSchema.parse({ name: DEMO_ALLOY.name, composition: DEMO_ALLOY.composition });
-  const stored = Object.fromEntries(Object.entries(composition).filter(([, v]) => typeof v === "number" && v > 0)) as AlloyComposition;
-  const savedAt = s.when(16);
-  const alloy = await SavedAlloy.create({ userId, name, composition: stored, createdAt: savedAt, updatedAt: savedAt }, { transaction: s.transaction, silent: true });
-
-  const { lessonSlug, note } = attachAlloyRequestSchema.parse({ lessonSlug: DEMO_ALLOY.lessonSlug, note: DEMO_ALLOY.note });
-  const attachedAt = s.when(15);
-  const existing = await LessonAlloy.findOne({ where: { alloyId: alloy.id, lessonSlug }, transaction: s.transaction });
-  if (existing) await existing.update({ note, attachedById: userId }, { transaction: s.transaction });
-  else await LessonAlloy.create({ alloyId: alloy.id, lessonSlug, note, attachedById: userId, createdAt: attachedAt, updatedAt: attachedAt }, { transaction: s.transaction, silent: true });
+  const instructor = historyActor(s, DEMO_INSTRUCTORS[0].email);
+  const alloy = await saveAlloy(s.db, instructor, createSavedAlloyRequestSchema.parse({ name: DEMO_ALLOY.name, composition: DEMO_ALLOY.composition }));
+  const { attachment } = await attachAlloy(
+    s.db,
+    s.catalog,
+    instructor,
+    alloy,
+    attachAlloyRequestSchema.parse({ lessonSlug: DEMO_ALLOY.lessonSlug, note: DEMO_ALLOY.note }),
+  );
+  await backdate(s, s.db.models.SavedAlloy, alloy.id, s.when(16));
+  await backdate(s, s.db.models.LessonAlloy, attachment.id, s.when(15));
   return true;
 }

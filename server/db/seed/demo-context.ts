@@ -1,15 +1,18 @@
 /**
  * What every part of the demo seed shares: an AppContext for calling the real services, the
- * course catalog, daytime moments before "now", user ids by e-mail, seeded random sources, and
- * the stored files to remove if the seed's transaction rolls back.
+ * course catalog, daytime moments before "now", user ids and service actors by e-mail, seeded
+ * random sources, and the stored files to remove if the seed's transaction rolls back.
+ * The services are called inside the seed's one transaction: their queued writes join it.
  */
-import { QueryTypes, type Transaction } from "sequelize";
+import { QueryTypes, type Attributes, type Model, type ModelStatic, type Transaction, type WhereOptions } from "sequelize";
 import { createRandom, type RandomSource } from "../../../shared/metallurgy/random";
 import { loadConfig, type Config } from "../../config";
 import type { AppContext } from "../../context";
 import type { Logger } from "../../log";
+import type { Actor } from "../../services/actor";
 import type { CourseCatalog } from "../../services/lessons/catalog";
 import type { Db } from "../database";
+import { DEMO_PEOPLE } from "./demo-people";
 
 const DAY_MS = 86_400_000;
 
@@ -51,6 +54,22 @@ export async function seedConfig(db: Db, config: Config | undefined): Promise<Co
 export function seedAppContext(db: Db, logger: Logger, config: Config): AppContext {
   // The seed ends no sessions; nobody is signed in yet.
   return { config, db, logger, sessions: { endSessionsForUser: async () => 0 } };
+}
+
+/**
+ * A demo person as the services' actor. They write the school's invented past, so the services
+ * add no audit rows and send no e-mail for it (see server/services/actor.ts).
+ */
+export function historyActor(s: SeedContext, email: string): Actor {
+  const person = DEMO_PEOPLE.find((p) => p.email === email);
+  if (!person) throw new Error(`no demo person ${email}`);
+  return { user: { id: s.userId(email), email, displayName: person.displayName, role: person.role }, ip: undefined, demoHistory: true };
+}
+
+/** The services stamp rows with the seed run's time; date a row from the story instead. */
+export async function backdate<M extends Model>(s: SeedContext, model: ModelStatic<M>, id: number, createdAt: Date, updatedAt = createdAt): Promise<void> {
+  const dates = { createdAt, updatedAt } as unknown as Partial<Attributes<M>>;
+  await model.update(dates, { where: { id } as unknown as WhereOptions<Attributes<M>>, transaction: s.transaction, silent: true });
 }
 
 export function dayOffset(now: Date): (days: number) => Date {
