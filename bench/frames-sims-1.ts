@@ -11,92 +11,14 @@
  * Reports median and p90 of the frame interval and of the per-frame compute (step + draw) and merges them
  * into bench/results.json under browser.passiveFilm and browser.carbides, leaving other keys alone.
  */
-import { existsSync, readFileSync, writeFileSync } from "node:fs";
-import { cpus, loadavg } from "node:os";
-import { fileURLToPath } from "node:url";
 import type { Browser, Page } from "playwright-core";
 import { launchBrowser, startTestServer } from "../tests/support/browser";
+import { mergeBrowserResults, newBenchPage, recordFrames, summaryText, waitForSummary } from "./browser-harness";
 
-const RESULTS = fileURLToPath(new URL("./results.json", import.meta.url));
-const MEASURE_MS = Number(process.env.BENCH_MEASURE_MS ?? 8000);
-
-interface Stats {
-  medianMs: number;
-  p90Ms: number;
-  meanMs: number;
-  samples: number;
-}
-
-function stats(values: number[]): Stats {
-  const sorted = [...values].sort((a, b) => a - b);
-  const q = (p: number) => {
-    if (sorted.length === 0) return NaN;
-    const pos = (sorted.length - 1) * p;
-    const lo = Math.floor(pos), hi = Math.ceil(pos);
-    return sorted[lo] + (sorted[hi] - sorted[lo]) * (pos - lo);
-  };
-  const mean = sorted.reduce((s, v) => s + v, 0) / Math.max(1, sorted.length);
-  return { medianMs: round(q(0.5)), p90Ms: round(q(0.9)), meanMs: round(mean), samples: sorted.length };
-}
-
-const round = (v: number) => Math.round(v * 1000) / 1000;
-
-async function summaryText(page: Page): Promise<string> {
-  return (await page.getByTestId("live-summary").textContent()) ?? "";
-}
-
-async function waitForSummary(page: Page, pattern: RegExp, timeout = 60_000): Promise<void> {
-  await page.waitForFunction(
-    ([source, flags]) => new RegExp(source, flags).test(document.querySelector("[data-testid=live-summary]")?.textContent ?? ""),
-    [pattern.source, pattern.flags] as const,
-    { timeout },
-  );
-}
-
-/** Records rAF intervals and the simulation's measures for MEASURE_MS while it runs. */
+/** Frame intervals and per-frame compute (a model step plus its drawing). */
 async function record(page: Page, stepName: string, drawName: string) {
-  // A string, not a closure: the TypeScript loader would wrap named functions in a helper the page lacks.
-  await page.evaluate(`(() => {
-    performance.clearMeasures();
-    window.__frames = [];
-    window.__recording = true;
-    let last = performance.now();
-    const tick = (t) => {
-      window.__frames.push(t - last);
-      last = t;
-      if (window.__recording) requestAnimationFrame(tick);
-    };
-    requestAnimationFrame(tick);
-  })()`);
-  await page.waitForTimeout(MEASURE_MS);
-  const raw = (await page.evaluate(`(() => {
-    window.__recording = false;
-    const entries = (name) => performance.getEntriesByName(name, "measure").map((e) => ({ start: e.startTime, duration: e.duration }));
-    return { frames: window.__frames.slice(1), step: entries(${JSON.stringify(stepName)}), draw: entries(${JSON.stringify(drawName)}) };
-  })()`)) as { frames: number[]; step: { start: number; duration: number }[]; draw: { start: number; duration: number }[] };
-  // Pair each step with the drawing that follows it in the same frame (a draw within 8 ms after its step).
-  const perFrame: number[] = [];
-  let d = 0;
-  for (const s of raw.step) {
-    while (d < raw.draw.length && raw.draw[d].start < s.start) d++;
-    const draw = d < raw.draw.length && raw.draw[d].start - s.start < 8 ? raw.draw[d].duration : 0;
-    perFrame.push(s.duration + draw);
-  }
-  return {
-    frameIntervalMs: stats(raw.frames),
-    computePerFrameMs: stats(perFrame),
-    stepMs: stats(raw.step.map((e) => e.duration)),
-    drawMs: stats(raw.draw.map((e) => e.duration)),
-    framesOver16_7ms: raw.frames.filter((f) => f > 1000 / 60 + 1).length,
-  };
-}
-
-async function newBenchPage(browser: Browser): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, reducedMotion: "no-preference" });
-  await context.addInitScript(() => {
-    (window as unknown as { __simBench: boolean }).__simBench = true;
-  });
-  return context.newPage();
+  const { measures, ...rest } = await recordFrames(page, [stepName, drawName]);
+  return { ...rest, stepMs: measures[stepName], drawMs: measures[drawName] };
 }
 
 async function benchPassiveFilm(browser: Browser, baseUrl: string) {
@@ -142,20 +64,7 @@ async function main() {
     console.log("passiveFilm", JSON.stringify(passiveFilm, null, 2));
     const carbides = await benchCarbides(browser, server.baseUrl);
     console.log("carbides", JSON.stringify(carbides, null, 2));
-    const results = existsSync(RESULTS) ? JSON.parse(readFileSync(RESULTS, "utf8")) : {};
-    results.browser = {
-      ...(results.browser ?? {}),
-      passiveFilm: { ...passiveFilm, measuredAt: new Date().toISOString() },
-      carbides: { ...carbides, measuredAt: new Date().toISOString() },
-      environment: {
-        chromium: browser.version(),
-        cpus: cpus().length,
-        loadAverage1m: round(loadavg()[0]),
-        note: "headless Chromium (--disable-gpu) on the 2-core reference machine; other jobs may share the CPU",
-      },
-    };
-    writeFileSync(RESULTS, `${JSON.stringify(results, null, 2)}\n`);
-    console.log(`merged into ${RESULTS} (browser.passiveFilm, browser.carbides)`);
+    mergeBrowserResults({ passiveFilm, carbides }, "environment", browser);
   } finally {
     await browser.close();
     await server.close();

@@ -12,96 +12,9 @@
  * the frame intervals. Results are merged into bench/results.json under browser.ingot,
  * browser.powder and browser.alloy, leaving every other key alone.
  */
-import { existsSync, readFileSync, writeFileSync } from "node:fs";
-import { cpus, loadavg } from "node:os";
-import { fileURLToPath } from "node:url";
 import type { Browser, Page } from "playwright-core";
 import { launchBrowser, startTestServer } from "../tests/support/browser";
-
-const RESULTS = fileURLToPath(new URL("./results.json", import.meta.url));
-const MEASURE_MS = Number(process.env.BENCH_MEASURE_MS ?? 8000);
-
-interface Stats {
-  medianMs: number;
-  p90Ms: number;
-  meanMs: number;
-  samples: number;
-}
-
-const round = (v: number) => Math.round(v * 1000) / 1000;
-
-function stats(values: number[]): Stats {
-  const sorted = [...values].sort((a, b) => a - b);
-  const q = (p: number) => {
-    if (sorted.length === 0) return NaN;
-    const pos = (sorted.length - 1) * p;
-    const lo = Math.floor(pos);
-    const hi = Math.ceil(pos);
-    return sorted[lo] + (sorted[hi] - sorted[lo]) * (pos - lo);
-  };
-  const mean = sorted.reduce((s, v) => s + v, 0) / Math.max(1, sorted.length);
-  return { medianMs: round(q(0.5)), p90Ms: round(q(0.9)), meanMs: round(mean), samples: sorted.length };
-}
-
-async function summaryText(page: Page): Promise<string> {
-  return (await page.getByTestId("live-summary").textContent()) ?? "";
-}
-
-async function waitForSummary(page: Page, pattern: RegExp, timeout = 90_000): Promise<void> {
-  await page.waitForFunction(
-    ([source, flags]) => new RegExp(source, flags).test(document.querySelector("[data-testid=live-summary]")?.textContent ?? ""),
-    [pattern.source, pattern.flags] as const,
-    { timeout },
-  );
-}
-
-/** rAF intervals and the named measures over MEASURE_MS (scripts as strings: the page has no tsx helpers). */
-async function recordFrames(page: Page, names: string[]) {
-  await page.evaluate(`(() => {
-    performance.clearMeasures();
-    window.__frames = [];
-    window.__recording = true;
-    let last = performance.now();
-    const tick = (t) => { window.__frames.push(t - last); last = t; if (window.__recording) requestAnimationFrame(tick); };
-    requestAnimationFrame(tick);
-  })()`);
-  await page.waitForTimeout(MEASURE_MS);
-  const raw = (await page.evaluate(`(() => {
-    window.__recording = false;
-    const out = { frames: window.__frames.slice(1) };
-    for (const name of ${JSON.stringify(names)}) out[name] = performance.getEntriesByName(name, "measure").map((e) => ({ start: e.startTime, duration: e.duration }));
-    return out;
-  })()`)) as { frames: number[] } & Record<string, { start: number; duration: number }[]>;
-  // Per-frame compute: the measures of the first name paired with the next measure of each other name within 8 ms.
-  const [first, ...rest] = names;
-  const perFrame = raw[first].map((s) => {
-    let total = s.duration;
-    for (const name of rest) {
-      const next = raw[name].find((e) => e.start >= s.start && e.start - s.start < 8);
-      if (next) total += next.duration;
-    }
-    return total;
-  });
-  const byName = Object.fromEntries(names.map((n) => [n, stats(raw[n].map((e) => e.duration))]));
-  return {
-    frameIntervalMs: stats(raw.frames),
-    computePerFrameMs: stats(perFrame),
-    measures: byName,
-    framesOver16_7ms: raw.frames.filter((f) => f > 1000 / 60 + 1).length,
-    frames: raw.frames.length,
-  };
-}
-
-async function newBenchPage(browser: Browser): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, reducedMotion: "no-preference" });
-  await context.addInitScript(() => {
-    const w = window as unknown as Record<string, unknown>;
-    w.__simBench = true;
-    w.__ingotTimings = [];
-    w.__powderTimings = [];
-  });
-  return context.newPage();
-}
+import { mergeBrowserResults, newBenchPage, recordFrames, round, stats, waitForSummary } from "./browser-harness";
 
 /** Wall time from a slider change to the live summary showing the new state. */
 async function timedChange(page: Page, slider: string, value: string, expect: RegExp): Promise<number> {
@@ -203,23 +116,7 @@ async function main() {
     console.log("powder", JSON.stringify(powder, null, 2));
     const alloy = await benchAlloy(browser, server.baseUrl);
     console.log("alloy", JSON.stringify(alloy, null, 2));
-    // Re-read just before writing: another benchmark may have merged its keys meanwhile.
-    const results = existsSync(RESULTS) ? JSON.parse(readFileSync(RESULTS, "utf8")) : {};
-    const at = new Date().toISOString();
-    results.browser = {
-      ...(results.browser ?? {}),
-      ingot: { ...ingot, measuredAt: at },
-      powder: { ...powder, measuredAt: at },
-      alloy: { ...alloy, measuredAt: at },
-      environmentSims2: {
-        chromium: browser.version(),
-        cpus: cpus().length,
-        loadAverage1m: round(loadavg()[0]),
-        note: "headless Chromium (--disable-gpu) on the 2-core reference machine; other jobs may share the CPU",
-      },
-    };
-    writeFileSync(RESULTS, `${JSON.stringify(results, null, 2)}\n`);
-    console.log(`merged into ${RESULTS} (browser.ingot, browser.powder, browser.alloy)`);
+    mergeBrowserResults({ ingot, powder, alloy }, "environmentSims2", browser);
   } finally {
     await browser.close();
     await server.close();

@@ -8,6 +8,7 @@ import type { AppContext } from "./context";
 import { openDatabase, type Db } from "./db/database";
 import { seedDemoIfEmpty } from "./db/seed/demo";
 import { createLogger, type Logger } from "./log";
+import { closeTeachingRuntime } from "./mail/runtime";
 import { apiNotFound, errorHandler } from "./middleware/error-handler";
 import { noStore, rejectCrossSite, requireJsonBody } from "./middleware/request-guards";
 import { securityHeaders } from "./middleware/security-headers";
@@ -15,6 +16,8 @@ import { allowsMultipart } from "./policy";
 import { createClientRouter } from "./routes/client";
 import { createHealthRouter } from "./routes/health";
 import { apiRouters } from "./routes/index";
+import { closeBillingRuntime } from "./billing/runtime";
+import { createBillingWebhookRouter } from "./routes/billing";
 
 export interface GrainEdgeApp {
   app: Express;
@@ -50,6 +53,8 @@ export async function createApp(config: Config, options: { logger?: Logger } = {
     api.use(noStore);
     // Health first: no session, no body.
     api.use("/health", createHealthRouter(ctx));
+    // Payment provider webhook: authenticated by its signature over the raw body, so before session/CSRF/JSON.
+    api.use("/billing/webhook", createBillingWebhookRouter(ctx));
     // Who is asking: session cookie -> session row -> user re-read from the database.
     api.use(session.middleware, passport.session(), enforceAbsoluteTimeout(config.session.absoluteTimeoutMs));
     // Unsafe requests: same-site only, CSRF token, JSON bodies only (<= 100 kB).
@@ -75,11 +80,17 @@ export async function createApp(config: Config, options: { logger?: Logger } = {
       config,
       logger,
       async close() {
+        // Background jobs and mail first (they still write), then the session store's timer,
+        // then the database (which waits for queued writes).
+        await closeTeachingRuntime(db);
+        await closeBillingRuntime(db); // the fake payment service's port
         session.store.close();
         await db.close();
       },
     };
   } catch (err) {
+    await closeTeachingRuntime(db).catch(() => undefined);
+    await closeBillingRuntime(db).catch(() => undefined);
     await db.close().catch(() => undefined);
     throw err;
   }

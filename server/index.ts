@@ -19,14 +19,24 @@ async function main(): Promise<void> {
   console.log(`Grain & Edge is running on http://${shownHost}:${port}`);
 
   let stopping = false;
+  // A response finished while stopping leaves an idle keep-alive socket that would hold the
+  // server open until keepAliveTimeout: close such sockets as soon as they become idle.
+  server.on("request", (_req, res) => {
+    res.once("finish", () => {
+      if (stopping) setImmediate(() => server.closeIdleConnections());
+    });
+  });
   const stop = (signal: string) => {
     if (stopping) return;
     stopping = true;
-    logger.info("shutting down", { signal });
-    // Stop accepting connections, let in-flight requests finish, then close the database.
+    // Stop accepting connections, let in-flight requests finish, then stop the background jobs
+    // and close the database (queued writes complete first). Exit 0 when all of that succeeded.
     server.close(() => {
       close().then(
-        () => process.exit(0),
+        () => {
+          logger.info("stopped", { signal });
+          process.exit(0);
+        },
         (err) => {
           logger.error("error while closing the database", { error: String(err) });
           process.exit(1);
@@ -34,7 +44,9 @@ async function main(): Promise<void> {
       );
     });
     server.closeIdleConnections();
-    // Do not hang forever on a stuck keep-alive client.
+    // Logged once the listening socket is closed: from here on new connections are refused.
+    logger.info("shutting down", { signal });
+    // Do not hang forever on a stuck client (a request that never completes).
     setTimeout(() => {
       logger.error("forced exit after 10 s");
       process.exit(1);

@@ -89,6 +89,9 @@ export const ROUTE_POLICY: readonly RoutePolicy[] = [
   { method: "DELETE", path: "/api/notebook/files/:fileId", access: "authenticated", object: "owner only (loadOwned, else 404)" },
   { method: "POST", path: "/api/notebook/entries/:id/review", access: ["instructor", "admin"], object: "instructor of a cohort the owner is in, or admin (loadOwned, else 404)" },
   { method: "GET", path: "/api/notebook/review", access: ["instructor", "admin"], object: "entries of students in own cohorts (instructor) or all (admin)" },
+  { method: "GET", path: "/api/billing/offer", access: "public" },
+  { method: "POST", path: "/api/billing/purchase", access: "public", object: "creates a new \"self\" account; refused when signed in; rate-limited" },
+  { method: "POST", path: "/api/billing/webhook", access: "public", object: "provider signature over the raw body (no session, no CSRF); event ids stored once" },
 ];
 
 function pathPattern(path: string): RegExp {

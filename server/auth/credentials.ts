@@ -1,6 +1,7 @@
 import { literal } from "sequelize";
 import type { PublicUser } from "../../shared/api/auth";
 import type { AppContext } from "../context";
+import { hasEverPaid } from "../billing/passes";
 import { recordAudit } from "../services/audit";
 import { requiredWaitMs, UnknownEmailThrottle } from "./account-throttle";
 import { verifyAgainstDummy, verifyPassword } from "./passwords";
@@ -9,6 +10,7 @@ import { normalizeEmail, toPublicUser } from "./public-user";
 export type CredentialCheck =
   | { ok: true; user: PublicUser }
   | { ok: false; reason: "invalid" }
+  | { ok: false; reason: "unpaid" }
   | { ok: false; reason: "throttled"; retryAfterS: number };
 
 /**
@@ -41,6 +43,8 @@ export function createCredentialChecker(ctx: AppContext) {
     if (wait > 0) return { ok: false, reason: "throttled", retryAfterS: Math.ceil(wait / 1000) };
 
     const passwordOk = await verifyPassword(user.passwordHash, password);
+    // A self-study account signs in only once its pass payment has succeeded (server/billing/).
+    if (passwordOk && !user.disabledAt && user.kind === "self" && !(await hasEverPaid(db, user.id))) return { ok: false, reason: "unpaid" };
     if (passwordOk && !user.disabledAt) {
       await db.write(async (t) => {
         if (user.failedLoginCount > 0) {

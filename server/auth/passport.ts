@@ -7,7 +7,7 @@ import { toPublicUser } from "./public-user";
 export type PassportInstance = InstanceType<typeof Passport>;
 
 export interface LoginFailure {
-  reason: "invalid" | "throttled";
+  reason: "invalid" | "throttled" | "unpaid";
   retryAfterS?: number;
 }
 
@@ -28,7 +28,7 @@ export function createPassport(ctx: AppContext, checkCredentials: CheckCredentia
         checkCredentials(email, password, req.ip).then((result) => {
           if (result.ok) return done(null, result.user);
           const failure: LoginFailure =
-            result.reason === "throttled" ? { reason: "throttled", retryAfterS: result.retryAfterS } : { reason: "invalid" };
+            result.reason === "throttled" ? { reason: "throttled", retryAfterS: result.retryAfterS } : { reason: result.reason };
           return done(null, false, failure as unknown as { message: string });
         }, done);
       },

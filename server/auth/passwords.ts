@@ -1,5 +1,7 @@
 import { randomBytes } from "node:crypto";
 import argon2 from "argon2";
+// For its effect: the shared password schema rejects the full common-password list on the server.
+import "./common-password-list";
 
 /**
  * argon2id with the OWASP / ASVS 11.4.2 minimum: 19 MiB memory, 2 passes, 1 lane

@@ -3,10 +3,9 @@
  * SMTP_URL), the invitation dispatcher, and a timer that retries pending invitations and sends
  * due-date reminders (not in tests: they call `runJobs` directly).
  *
- * One runtime per database (WeakMap), created by the teaching routers. It closes itself before
- * the database does: `db.close` is wrapped so timers stop, queued sends finish and the SMTP
- * fake shuts down first. (An explicit `await closeTeachingRuntime(db)` in createApp's close()
- * would do the same and is the cleaner place for it.)
+ * One runtime per database (WeakMap), created by the teaching routers. createApp's close() calls
+ * `closeTeachingRuntime(db)` before closing the database: timers stop, queued sends finish and
+ * the SMTP fake shuts down while the database can still record them.
  */
 import type { JobsRunResult } from "../../shared/api/admin";
 import type { AppContext } from "../context";
@@ -34,6 +33,7 @@ export function teachingRuntimeOf(db: Db): TeachingRuntime | undefined {
   return runtimes.get(db);
 }
 
+/** Stop the jobs timer, wait for running jobs and sends, close the mailer (and SMTP fake). Idempotent. */
 export async function closeTeachingRuntime(db: Db): Promise<void> {
   await runtimes.get(db)?.close();
 }
@@ -88,11 +88,5 @@ export function teachingRuntime(ctx: AppContext): TeachingRuntime {
     },
   };
   runtimes.set(ctx.db, runtime);
-
-  const closeDb = ctx.db.close.bind(ctx.db);
-  ctx.db.close = async () => {
-    await runtime.close();
-    await closeDb();
-  };
   return runtime;
 }

@@ -22,6 +22,33 @@ interface ClassifiedError {
   headers?: Record<string, string>;
 }
 
+/**
+ * Storage failures (reliability guide §3, §5b): the disk or the database file cannot take the
+ * write. The transaction was rolled back (SQLite) or the partial file removed (uploads), so the
+ * client may retry later; the process keeps serving reads.
+ *   full       SQLITE_FULL, ENOSPC, EDQUOT            -> 507 storage_full
+ *   unusable   SQLITE_READONLY, SQLITE_IOERR, EROFS,   -> 503 storage_unavailable (+ Retry-After)
+ *              SQLITE_CANTOPEN, EIO
+ */
+const STORAGE_FULL = new Set(["SQLITE_FULL", "ENOSPC", "EDQUOT"]);
+const STORAGE_UNUSABLE = new Set(["SQLITE_READONLY", "SQLITE_IOERR", "SQLITE_CANTOPEN", "EROFS", "EIO"]);
+
+function classifyStorageError(code: string | undefined): ClassifiedError | undefined {
+  if (code === undefined) return undefined;
+  if (STORAGE_FULL.has(code)) {
+    return { status: 507, code: "storage_full", message: "The server's storage is full. Your change was not saved; try again later.", headers: { "Retry-After": "60" } };
+  }
+  if (STORAGE_UNUSABLE.has(code)) {
+    return {
+      status: 503,
+      code: "storage_unavailable",
+      message: "The server cannot write its data right now. Your change was not saved; try again later.",
+      headers: { "Retry-After": "30" },
+    };
+  }
+  return undefined;
+}
+
 function classify(err: unknown): ClassifiedError {
   if (err instanceof HttpError) return err;
   const e = err as { type?: string; name?: string; parent?: { code?: string }; original?: { code?: string }; code?: string };
@@ -33,10 +60,9 @@ function classify(err: unknown): ClassifiedError {
     return { status: 409, code: "conflict", message: "That record already exists." };
   }
   const sqliteCode = e?.parent?.code ?? e?.original?.code ?? e?.code;
-  if (sqliteCode === "SQLITE_FULL") {
-    return { status: 507, code: "storage_full", message: "The server's storage is full. Try again later." };
-  }
-  if (sqliteCode === "SQLITE_READONLY" || sqliteCode === "SQLITE_BUSY" || e?.name === "SequelizeTimeoutError") {
+  const storage = classifyStorageError(sqliteCode);
+  if (storage) return storage;
+  if (sqliteCode === "SQLITE_BUSY" || e?.name === "SequelizeTimeoutError") {
     return {
       status: 503,
       code: "service_unavailable",

@@ -59,6 +59,9 @@ export function createAuthRouter(ctx: AppContext, deps: AuthRouterDeps): Router 
     const { user, info } = await authenticateLocal(deps.passport, req);
     if (!user) {
       if (info?.reason === "throttled") throw throttled(info.retryAfterS ?? 1);
+      if (info?.reason === "unpaid") {
+        throw new HttpError(403, "payment_incomplete", "The payment for this self-study account has not gone through, so it cannot sign in yet. Try again in a few minutes, or buy the pass again on the Join page.");
+      }
       throw new HttpError(401, "invalid_credentials", INVALID_CREDENTIALS);
     }
     // passport 0.7 regenerates the session here: new id, old one destroyed in the store.

@@ -8,6 +8,7 @@ import { createQuizzesRouter } from "./quizzes";
 import { createAlloysRouter, createLessonAlloysRouter } from "./alloys";
 import { teachingRouters } from "./teaching";
 import { createNotebookRouter } from "./notebook";
+import { createBillingRouter, createStudyPassGates } from "./billing";
 
 /**
  * API routers, mounted under /api after the session, CSRF and JSON-body middleware.
@@ -23,6 +24,8 @@ export function apiRouters(ctx: AppContext, auth: AuthRouterDeps): [string, Rout
   return [
     ["/auth", createAuthRouter(ctx, auth)],
     ["/me", createMeRouter(ctx)],
+    // Self-study pass gates run before the lessons' progress and quiz routes (server/billing/access.ts).
+    ...createStudyPassGates(ctx),
     ["/modules", createModulesRouter(ctx)],
     ["/lessons", createLessonsRouter(ctx)],
     ["/quizzes", createQuizzesRouter(ctx)],
@@ -31,5 +34,6 @@ export function apiRouters(ctx: AppContext, auth: AuthRouterDeps): [string, Rout
     ["/lessons", createLessonAlloysRouter(ctx)],
     ...teachingRouters(ctx),
     ["/notebook", createNotebookRouter(ctx)],
+    ["/billing", createBillingRouter(ctx)],
   ];
 }

@@ -11,6 +11,14 @@ import path from "node:path";
 export const STORED_NAME = /^[a-f0-9]{32}(-t)?\.(jpg|webp|pdf)$/;
 export type StoredExt = "jpg" | "webp" | "pdf";
 
+/**
+ * How bytes reach the disk. A seam for tests: a test swaps `writeFile` to simulate a full disk
+ * (ENOSPC after part of the bytes were written), which needs no root and no small file system.
+ */
+export const uploadDisk = {
+  writeFile: (file: string, data: Buffer, options: { flag: string; mode: number }): Promise<void> => fs.writeFile(file, data, options),
+};
+
 export class UploadStore {
   constructor(readonly dir: string) {}
 
@@ -27,7 +35,15 @@ export class UploadStore {
   async write(data: Buffer, ext: StoredExt, options: { thumb?: boolean; base?: string } = {}): Promise<string> {
     const base = options.base ?? randomBytes(16).toString("hex");
     const name = `${base}${options.thumb ? "-t" : ""}.${ext}`;
-    await fs.writeFile(this.pathOf(name), data, { flag: "wx", mode: 0o600 });
+    const file = this.pathOf(name);
+    try {
+      await uploadDisk.writeFile(file, data, { flag: "wx", mode: 0o600 });
+    } catch (err) {
+      // A failed write (e.g. ENOSPC part-way) can leave a partial file under our new name: remove
+      // it, unless the name already existed (EEXIST: not ours to remove).
+      if ((err as NodeJS.ErrnoException).code !== "EEXIST") await fs.unlink(file).catch(() => undefined);
+      throw err;
+    }
     return name;
   }
 

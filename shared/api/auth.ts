@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { isCommonPassword } from "./common-passwords";
 
-import { ROLES, type Role } from "./roles";
+import { ROLES } from "./roles";
 
 export { ROLES, ROLE_HOME, type Role } from "./roles";
 export const roleSchema = z.enum(ROLES);

@@ -2,6 +2,7 @@
 export const paths = {
   home: "/",
   signIn: "/sign-in",
+  join: "/join",
   learn: "/learn",
   modules: "/learn/modules",
   lesson: (moduleSlug: string, lessonSlug: string) => `/learn/${encodeURIComponent(moduleSlug)}/${encodeURIComponent(lessonSlug)}`,

@@ -2,6 +2,7 @@ import { initial } from "./0001-initial";
 import { savedAlloys } from "./0005-saved-alloys";
 import { teaching } from "./0020-teaching";
 import { notebook } from "./0040-notebook";
+import { selfStudy } from "./0060-self-study";
 import type { Migration } from "./types";
 
 /**
@@ -20,6 +21,7 @@ export const MIGRATIONS: readonly Migration[] = [
   savedAlloys,
   teaching,
   notebook,
+  selfStudy,
 ];
 
 export type { Migration, MigrationContext } from "./types";

@@ -17,6 +17,8 @@ import { reminderLogModel } from "./reminder-log";
 import { notebookEntryModel } from "./notebook-entry";
 import { notebookFileModel } from "./notebook-file";
 import { notebookCommentModel } from "./notebook-comment";
+import { studyPassModel } from "./study-pass";
+import { billingEventModel } from "./billing-event";
 
 /**
  * Model registry. Models are defined per Sequelize instance (not with global `Model.init`), so
@@ -47,6 +49,8 @@ const REGISTRY = {
   NotebookEntry: notebookEntryModel,
   NotebookFile: notebookFileModel,
   NotebookComment: notebookCommentModel,
+  StudyPass: studyPassModel,
+  BillingEvent: billingEventModel,
 };
 
 type Registry = typeof REGISTRY;
@@ -79,3 +83,5 @@ export type { LessonAlloyInstance } from "./lesson-alloy";
 export type { InvitationInstance } from "./invitation";
 export type { OutboxMessageInstance } from "./outbox-message";
 export type { ReminderLogInstance } from "./reminder-log";
+export type { StudyPassInstance } from "./study-pass";
+export type { BillingEventInstance } from "./billing-event";

@@ -17,6 +17,8 @@ export interface UserInstance extends Model<InferAttributes<UserInstance>, Infer
   /** argon2id PHC string. Never serialised to clients. */
   passwordHash: string;
   role: Role;
+  /** "school" (demo seed, admin, invitation) or "self" (bought a self-study pass; see server/billing/). */
+  kind: CreationOptional<"school" | "self">;
   disabledAt: CreationOptional<Date | null>;
   /** Consecutive failed sign-ins; drives the per-account delay (no hard lockout). */
   failedLoginCount: CreationOptional<number>;
@@ -35,6 +37,7 @@ export const userModel: ModelEntry<UserInstance> = {
         displayName: { type: DataTypes.STRING(120), allowNull: false },
         passwordHash: { type: DataTypes.STRING(255), allowNull: false },
         role: { type: DataTypes.STRING(16), allowNull: false, validate: { isIn: [ROLES as unknown as string[]] } },
+        kind: { type: DataTypes.STRING(8), allowNull: false, defaultValue: "school", validate: { isIn: [["school", "self"]] } },
         disabledAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
         failedLoginCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         lastFailedLoginAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },

@@ -112,6 +112,11 @@ export function Component() {
             >
               <h3 className="text-xl font-semibold">{audience.who}</h3>
               <p className="mt-2 leading-relaxed text-soot-700">{audience.what}</p>
+              {audience.who === "Self-learners" ? (
+                <Link to={paths.join} className="mt-3 inline-block font-semibold text-quench-700 underline underline-offset-4 hover:text-quench-800">
+                  Get a self-study pass
+                </Link>
+              ) : null}
             </li>
           ))}
         </ul>

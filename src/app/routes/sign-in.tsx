@@ -20,7 +20,7 @@ export function Component() {
             <p className="mt-2 text-soot-600">
               {isSafeNext(next)
                 ? "Sign in to continue to the page you asked for."
-                : "Use the account your school gave you. You will land on your own home page."}
+                : "Use the account your school gave you, or the one you made with a self-study pass. You will land on your own home page."}
             </p>
             <div className="mt-7">
               <SignInForm
@@ -33,7 +33,11 @@ export function Component() {
             <Link to={paths.lab} className="font-semibold text-ember-300 underline underline-offset-4">
               simulation lab
             </Link>{" "}
-            is open to everyone.
+            is open to everyone, and a{" "}
+            <Link to={paths.join} className="font-semibold text-ember-300 underline underline-offset-4">
+              self-study pass
+            </Link>{" "}
+            opens the lessons and quizzes.
           </p>
         </div>
       </div>

@@ -1,0 +1,58 @@
+/**
+ * Self-study passes: who has paid, who has a valid pass now, and activating a pass when the
+ * provider reports a succeeded payment. Activation is idempotent (the purchase route and the
+ * webhook may both report the same payment, in either order) and runs in the write queue.
+ */
+import { Op, type Transaction } from "sequelize";
+import type { Db } from "../db/database";
+import { recordAudit } from "../services/audit";
+
+/** A payment as the provider reports it (only what activation needs). */
+export interface SucceededPayment {
+  id: string;
+  amount: number;
+  currency: string;
+}
+
+export type ActivationOutcome = "activated" | "already_active" | "unknown_payment" | "amount_mismatch";
+
+/** Pass validity: `months` calendar months after `from`, in UTC. */
+export function passValidUntil(from: Date, months: number): Date {
+  const until = new Date(from.getTime());
+  until.setUTCMonth(until.getUTCMonth() + months);
+  return until;
+}
+
+/** True once any payment for this user has succeeded (a "self" account may sign in from then on). */
+export async function hasEverPaid(db: Db, userId: number): Promise<boolean> {
+  const row = await db.read(() => db.models.StudyPass.findOne({ where: { userId, status: "succeeded" }, attributes: ["id"] }));
+  return row !== null;
+}
+
+/** True when the user holds a succeeded pass valid at `now`. */
+export async function hasValidPass(db: Db, userId: number, now = new Date()): Promise<boolean> {
+  const row = await db.read(() =>
+    db.models.StudyPass.findOne({ where: { userId, status: "succeeded", validUntil: { [Op.gt]: now } }, attributes: ["id"] }),
+  );
+  return row !== null;
+}
+
+/**
+ * Mark the pass for this provider payment as paid, valid for `months` from now. A payment the app
+ * does not know (e.g. its sign-up was abandoned) or whose amount or currency differ from what the
+ * pass was created for is not activated; the outcome says why.
+ */
+export async function activatePass(db: Db, payment: SucceededPayment, months: number, now = new Date()): Promise<ActivationOutcome> {
+  return db.write(async (transaction: Transaction) => {
+    const pass = await db.models.StudyPass.findOne({ where: { providerPaymentId: payment.id }, transaction });
+    if (!pass) return "unknown_payment";
+    if (pass.status === "succeeded") return "already_active";
+    if (pass.amountMinor !== payment.amount || pass.currency !== payment.currency.toLowerCase()) {
+      await recordAudit(db, { actorId: null, action: "billing.amount_mismatch", targetType: "user", targetId: pass.userId, details: { paymentId: payment.id, expected: pass.amountMinor, got: payment.amount, currency: payment.currency } }, transaction);
+      return "amount_mismatch";
+    }
+    await pass.update({ status: "succeeded", paidAt: now, validUntil: passValidUntil(now, months) }, { transaction });
+    await recordAudit(db, { actorId: pass.userId, action: "billing.pass_activated", targetType: "user", targetId: pass.userId, details: { paymentId: payment.id, amountMinor: pass.amountMinor, currency: pass.currency } }, transaction);
+    return "activated";
+  });
+}
