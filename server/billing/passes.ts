@@ -29,6 +29,14 @@ export async function hasEverPaid(db: Db, userId: number): Promise<boolean> {
   return row !== null;
 }
 
+/** The end of the user's latest paid pass, or null when they never paid. */
+export async function latestPassValidUntil(db: Db, userId: number): Promise<Date | null> {
+  const row = await db.read(() =>
+    db.models.StudyPass.findOne({ where: { userId, status: "succeeded" }, order: [["validUntil", "DESC"]], attributes: ["validUntil"] }),
+  );
+  return row?.validUntil ? new Date(row.validUntil) : null;
+}
+
 /** True when the user holds a succeeded pass valid at `now`. */
 export async function hasValidPass(db: Db, userId: number, now = new Date()): Promise<boolean> {
   const row = await db.read(() =>

@@ -1,5 +1,6 @@
 import { Op, fn, col } from "sequelize";
 import type { PublicUser } from "../../shared/api/auth";
+import { latestPassValidUntil } from "../billing/passes";
 import type { AdminSummary, InstructorSummary, MeSummary, StudentSummary } from "../../shared/api/me";
 import type { Db } from "../db/database";
 
@@ -49,11 +50,13 @@ async function studentSummary(db: Db, user: PublicUser, now: Date): Promise<Stud
     };
   });
 
-  const [lessonsStarted, lessonsCompleted] = await Promise.all([
+  const [lessonsStarted, lessonsCompleted, account] = await Promise.all([
     LessonProgress.count({ where: { userId: user.id } }),
     LessonProgress.count({ where: { userId: user.id, completedAt: { [Op.ne]: null } } }),
+    User.findByPk(user.id, { attributes: ["kind"] }),
   ]);
-  return { role: "student", cohorts, progress: { lessonsStarted, lessonsCompleted } };
+  const selfStudy = account?.kind === "self" ? { passValidUntil: (await latestPassValidUntil(db, user.id))?.toISOString() ?? null } : null;
+  return { role: "student", cohorts, progress: { lessonsStarted, lessonsCompleted }, selfStudy };
 }
 
 async function instructorSummary(db: Db, user: PublicUser): Promise<InstructorSummary> {

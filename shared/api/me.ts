@@ -26,6 +26,8 @@ export const meSummarySchema = z.discriminatedUnion("role", [
     role: z.literal("student"),
     cohorts: z.array(studentCohortSummarySchema),
     progress: z.object({ lessonsStarted: z.number().int(), lessonsCompleted: z.number().int() }),
+    /** Self-learners only (null for school accounts): when their self-study pass ends (ISO), null if never paid. */
+    selfStudy: z.object({ passValidUntil: z.string().nullable() }).nullable(),
   }),
   z.object({
     role: z.literal("instructor"),

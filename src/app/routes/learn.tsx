@@ -1,7 +1,10 @@
 import type { StudentCohortSummary, StudentSummary } from "@shared/api/me";
+import { Link } from "react-router";
 import { useMe } from "@/api/auth";
 import { useMeSummary } from "@/api/me";
+import { buttonClasses } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
+import { paths } from "@/config/paths";
 import { PageBody, PageHeader } from "@/components/ui/page-header";
 import { Stat, StatGrid } from "@/components/ui/stat";
 import { firstName, formatDate, plural } from "@/features/home/format";
@@ -63,26 +66,66 @@ function StudentOverview({ summary }: { summary: StudentSummary }) {
         </StatGrid>
       </section>
 
-      <section aria-labelledby="learn-cohorts">
-        <h2 id="learn-cohorts" className="text-2xl font-semibold">
-          Your cohorts
-        </h2>
-        {summary.cohorts.length === 0 ? (
-          <p className="mt-3 max-w-prose leading-relaxed text-soot-700">
-            You are not in a cohort yet. When your instructor adds you to one, its assignments and due dates appear
-            here. Meanwhile, the simulation lab is open.
-          </p>
-        ) : (
-          <ul className="mt-4 grid gap-4 md:grid-cols-2">
-            {summary.cohorts.map((cohort) => (
-              <li key={cohort.id}>
-                <CohortCard cohort={cohort} />
-              </li>
-            ))}
-          </ul>
-        )}
-      </section>
+      {summary.selfStudy ? (
+        <SelfStudyPass passValidUntil={summary.selfStudy.passValidUntil} />
+      ) : (
+        <section aria-labelledby="learn-cohorts">
+          <h2 id="learn-cohorts" className="text-2xl font-semibold">
+            Your cohorts
+          </h2>
+          {summary.cohorts.length === 0 ? (
+            <p className="mt-3 max-w-prose leading-relaxed text-soot-700">
+              You are not in a cohort yet. When your instructor adds you to one, its assignments and due dates appear
+              here. Meanwhile, the simulation lab is open.
+            </p>
+          ) : (
+            <ul className="mt-4 grid gap-4 md:grid-cols-2">
+              {summary.cohorts.map((cohort) => (
+                <li key={cohort.id}>
+                  <CohortCard cohort={cohort} />
+                </li>
+              ))}
+            </ul>
+          )}
+        </section>
+      )}
     </>
+  );
+}
+
+/** A self-learner's pass instead of cohorts: until when it runs, or how to renew it. */
+function SelfStudyPass({ passValidUntil }: { passValidUntil: string | null }) {
+  const active = passValidUntil !== null && new Date(passValidUntil).getTime() > Date.now();
+  return (
+    <section aria-labelledby="learn-pass">
+      <h2 id="learn-pass" className="text-2xl font-semibold">
+        Your self-study pass
+      </h2>
+      <Card className="mt-4 border-t-4 border-t-quench-500">
+        {active ? (
+          <>
+            <p className="leading-relaxed text-soot-800">
+              Every lesson and quiz is open to you until <strong className="font-mono">{formatDate(passValidUntil)}</strong>. Work through the
+              modules in any order; your progress and quiz results are kept here.
+            </p>
+            <Link to={paths.modules} className={buttonClasses("primary", "md", "mt-4")}>
+              Go to the modules
+            </Link>
+          </>
+        ) : (
+          <>
+            <p className="leading-relaxed text-soot-800">
+              {passValidUntil
+                ? `Your pass ended on ${formatDate(passValidUntil)}. Your progress is kept; a new pass opens the lessons and quizzes again.`
+                : "Your pass is not active yet. A pass opens the lessons and quizzes; the simulation lab is open to everyone."}
+            </p>
+            <Link to={paths.join} className={buttonClasses("primary", "md", "mt-4")}>
+              Get a self-study pass
+            </Link>
+          </>
+        )}
+      </Card>
+    </section>
   );
 }
 
