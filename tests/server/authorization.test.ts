@@ -121,6 +121,8 @@ describe("GET /api/me/summary", () => {
       role: "student",
       cohorts: [],
       progress: { lessonsStarted: 0, lessonsCompleted: 0 },
+      // A school account: no self-study pass section.
+      selfStudy: null,
     });
     expect((await agents.instructor.agent.get("/api/me/summary").expect(200)).body).toEqual({ role: "instructor", cohorts: [] });
     const admin = (await agents.admin.agent.get("/api/me/summary").expect(200)).body;
