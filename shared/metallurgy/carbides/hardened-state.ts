@@ -1,7 +1,7 @@
 import { validateComposition, type Composition, type Element } from "../composition";
 import { InputError } from "../errors";
 import { requireInRange } from "../validate";
-import { allocateCarbides, type AllocationOptions, type CarbideAllocation, type CarbidePhase, type CarbideElement } from "./carbide-allocation";
+import { allocateCarbides, type AllocationOptions, type CarbideAllocation, type CarbidePhase, type CarbideElement, type MatrixState } from "./carbide-allocation";
 import { CARBIDE_DATA, CARBIDE_TYPES, type CarbideType } from "./carbide-data";
 
 export interface HardenedStateOptions {
@@ -11,19 +11,11 @@ export interface HardenedStateOptions {
   allocation?: AllocationOptions;
 }
 
-export interface SolutionState {
-  /** Austenite (→ martensite) mass, % of the alloy. */
-  massPct: number;
-  volumePct: number;
-  /** Contents in solution, mass % of the austenite: feed these to §2.3–2.4 (hardness, Ms). */
-  carbonMassPct: number;
-  chromiumMassPct: number;
-  molybdenumMassPct: number;
-  tungstenMassPct: number;
-  vanadiumMassPct: number;
-  nitrogenMassPct: number;
-  composition: Required<Composition>;
-}
+/**
+ * The austenite (→ martensite) at the hardening temperature, in the same shape as the annealed
+ * matrix: its contents in solution (mass % of the austenite) feed §2.3–2.4 (hardness, Ms).
+ */
+export type SolutionState = MatrixState;
 
 export interface HardenedState {
   solution: SolutionState;
