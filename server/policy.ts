@@ -91,6 +91,7 @@ export const ROUTE_POLICY: readonly RoutePolicy[] = [
   { method: "GET", path: "/api/notebook/review", access: ["instructor", "admin"], object: "entries of students in own cohorts (instructor) or all (admin)" },
   { method: "GET", path: "/api/billing/offer", access: "public" },
   { method: "POST", path: "/api/billing/purchase", access: "public", object: "creates a new \"self\" account; refused when signed in; rate-limited" },
+  { method: "POST", path: "/api/billing/renew", access: ["student"], object: "own pass only (req.user); \"self\" accounts only (school students 403); rate-limited" },
   { method: "POST", path: "/api/billing/webhook", access: "public", object: "provider signature over the raw body (no session, no CSRF); event ids stored once" },
 ];
 

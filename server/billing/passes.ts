@@ -46,9 +46,11 @@ export async function hasValidPass(db: Db, userId: number, now = new Date()): Pr
 }
 
 /**
- * Mark the pass for this provider payment as paid, valid for `months` from now. A payment the app
- * does not know (e.g. its sign-up was abandoned) or whose amount or currency differ from what the
- * pass was created for is not activated; the outcome says why.
+ * Mark the pass for this provider payment as paid, valid for `months` from max(now, the end of the
+ * user's latest paid pass): a renewal bought while a pass still runs extends it instead of
+ * overlapping, and a first purchase or a lapsed pass starts now. A payment the app does not know
+ * (e.g. its sign-up was abandoned) or whose amount or currency differ from what the pass was
+ * created for is not activated; the outcome says why.
  */
 export async function activatePass(db: Db, payment: SucceededPayment, months: number, now = new Date()): Promise<ActivationOutcome> {
   return db.write(async (transaction: Transaction) => {
@@ -59,7 +61,9 @@ export async function activatePass(db: Db, payment: SucceededPayment, months: nu
       await recordAudit(db, { actorId: null, action: "billing.amount_mismatch", targetType: "user", targetId: pass.userId, details: { paymentId: payment.id, expected: pass.amountMinor, got: payment.amount, currency: payment.currency } }, transaction);
       return "amount_mismatch";
     }
-    await pass.update({ status: "succeeded", paidAt: now, validUntil: passValidUntil(now, months) }, { transaction });
+    const latest = await db.models.StudyPass.findOne({ where: { userId: pass.userId, status: "succeeded" }, order: [["validUntil", "DESC"]], transaction });
+    const from = latest?.validUntil && latest.validUntil.getTime() > now.getTime() ? new Date(latest.validUntil) : now;
+    await pass.update({ status: "succeeded", paidAt: now, validUntil: passValidUntil(from, months) }, { transaction });
     await recordAudit(db, { actorId: pass.userId, action: "billing.pass_activated", targetType: "user", targetId: pass.userId, details: { paymentId: payment.id, amountMinor: pass.amountMinor, currency: pass.currency } }, transaction);
     return "activated";
   });

@@ -9,35 +9,38 @@
  * (no usable account is left and the same e-mail can try again) and answer 402 with the provider's
  * message. Succeeded: activate the pass (idempotent; the webhook may have done it already) and
  * sign the person in, regenerating the session as sign-in does.
+ *
+ * Renewal (signed-in "self" accounts only): the same provider path with a new "pending" pass row
+ * for the caller; succeeded = activatePass, which starts the new months at the later of now and the
+ * current end (so renewing early extends); declined = the pending row is removed and the old end
+ * date stands.
  */
 import express, { Router, type Request } from "express";
 import { rateLimit } from "express-rate-limit";
 import { Op, UniqueConstraintError } from "sequelize";
 import Stripe from "stripe";
 import type { SessionResponse } from "../../shared/api/auth";
-import { parseExpiry, purchasePassRequestSchema, type PassOffer } from "../../shared/api/billing";
+import { purchasePassRequestSchema, renewPassRequestSchema, type PassOffer, type RenewPassResponse } from "../../shared/api/billing";
 import { hashPassword } from "../auth/passwords";
 import { normalizeEmail, toPublicUser } from "../auth/public-user";
 import { requireStudyPass } from "../billing/access";
-import { activatePass } from "../billing/passes";
+import { confirmWithCard, createPassIntent, PASS_NAME, succeededPayment, type CardDetails } from "../billing/charge";
+import { activatePass, latestPassValidUntil } from "../billing/passes";
 import { billingRuntime } from "../billing/runtime";
 import type { AppContext } from "../context";
 import type { UserInstance } from "../db/models";
 import { HttpError } from "../errors";
+import { currentUser } from "../middleware/authorize";
 import { validate } from "../middleware/validate";
 import { recordAudit } from "../services/audit";
 
-export const PASS_NAME = "Self-study pass";
 /** A "pending" sign-up older than this is treated as abandoned (e.g. the server stopped mid-purchase). */
 const ABANDONED_AFTER_MS = 15 * 60_000;
 
-interface PurchaseBody {
+interface PurchaseBody extends CardDetails {
   displayName: string;
   email: string;
   password: string;
-  cardNumber: string;
-  cardExpiry: string;
-  cardCvc: string;
 }
 
 const emailTaken = () =>
@@ -64,14 +67,17 @@ export function createBillingRouter(ctx: AppContext): Router {
   const router = Router();
   const rt = billingRuntime(ctx.db);
   const { pass } = rt.settings;
-  const limiter = rateLimit({
-    windowMs: ctx.config.loginRateLimit.windowMs,
-    // The same per-IP budget as sign-in (LOGIN_RATE_LIMIT per LOGIN_RATE_WINDOW_MINUTES), counting every attempt.
-    limit: ctx.config.loginRateLimit.limit,
-    standardHeaders: "draft-8",
-    legacyHeaders: false,
-    handler: (_req, _res, next) => next(new HttpError(429, "rate_limited", "Too many purchase attempts from this network. Try again later.")),
-  });
+  // The same per-IP budget as sign-in (LOGIN_RATE_LIMIT per LOGIN_RATE_WINDOW_MINUTES), counting every attempt; one budget per route.
+  const paymentLimiter = (what: string) =>
+    rateLimit({
+      windowMs: ctx.config.loginRateLimit.windowMs,
+      limit: ctx.config.loginRateLimit.limit,
+      standardHeaders: "draft-8",
+      legacyHeaders: false,
+      handler: (_req, _res, next) => next(new HttpError(429, "rate_limited", `Too many ${what} attempts from this network. Try again later.`)),
+    });
+  const limiter = paymentLimiter("purchase");
+  const renewLimiter = paymentLimiter("renewal");
 
   // GET /api/billing/offer -> PassOffer
   router.get("/offer", (_req, res) => {
@@ -89,13 +95,8 @@ export function createBillingRouter(ctx: AppContext): Router {
 
     const { stripe } = await rt.client();
     await rt.aimFakeWebhooks(req);
-    let intent: Stripe.PaymentIntent;
-    try {
-      intent = await stripe.paymentIntents.create({ amount: pass.amountMinor, currency: pass.currency, description: PASS_NAME, metadata: { product: "self_study_pass" } });
-    } catch (err) {
-      ctx.logger.warn("payment intent create failed", { error: err instanceof Error ? err.name : "unknown" });
-      throw new HttpError(502, "payment_unavailable", "The payment service is not available right now. Nothing was charged and no account was created; try again later.");
-    }
+    const intent = await createPassIntent(stripe, pass, ctx.logger, {});
+    if (!intent) throw new HttpError(502, "payment_unavailable", "The payment service is not available right now. Nothing was charged and no account was created; try again later.");
 
     const user = await ctx.db.write(async (transaction) => {
       const abandoned = await checkEmailFree(ctx, email, Date.now());
@@ -111,32 +112,28 @@ export function createBillingRouter(ctx: AppContext): Router {
       }
     });
 
-    const { month, year } = parseExpiry(body.cardExpiry);
-    let confirmed: Stripe.PaymentIntent;
-    try {
-      // Raw card data is a fake-provider convenience; the SDK's types only know tokens, hence the cast.
-      const params = { payment_method_data: { type: "card", card: { number: body.cardNumber, exp_month: month, exp_year: year, cvc: body.cardCvc } } };
-      confirmed = await stripe.paymentIntents.confirm(intent.id, params as unknown as Stripe.PaymentIntentConfirmParams);
-    } catch (err) {
+    const charge = await confirmWithCard(stripe, intent.id, body, ctx.logger);
+    if (!charge.ok) {
+      const { failure } = charge;
       // A card decline or a refused request means no money moved: remove the account so the e-mail stays free.
-      if (err instanceof Stripe.errors.StripeCardError || err instanceof Stripe.errors.StripeInvalidRequestError) {
+      if (failure.kind === "declined" || failure.kind === "refused") {
         await ctx.db.write(async (transaction) => {
           await user.destroy({ transaction }); // cascades to the pending pass
-          await recordAudit(ctx.db, { actorId: null, action: "billing.payment_declined", details: { email, paymentId: intent.id, code: err.code ?? null, declineCode: err.decline_code ?? null }, ip: req.ip }, transaction);
+          const details = { email, paymentId: intent.id, code: failure.code, declineCode: failure.kind === "declined" ? failure.declineCode : null };
+          await recordAudit(ctx.db, { actorId: null, action: "billing.payment_declined", details, ip: req.ip }, transaction);
         });
-        if (!(err instanceof Stripe.errors.StripeCardError)) {
+        if (failure.kind === "refused") {
           throw new HttpError(502, "payment_unavailable", "The payment service refused the request. Nothing was charged and no account was created; try again later.");
         }
-        const message = `${err.message} No account was created and nothing was charged; you can try again.`;
-        throw new HttpError(402, "payment_declined", message, { cardNumber: [err.message] });
+        const message = `${failure.message} No account was created and nothing was charged; you can try again.`;
+        throw new HttpError(402, "payment_declined", message, { cardNumber: [failure.message] });
       }
-      ctx.logger.warn("payment confirm failed", { paymentId: intent.id, error: err instanceof Error ? err.name : "unknown" });
-      throw new HttpError(502, "payment_unavailable", "The payment service did not answer. Your account is on hold; wait a few minutes and try signing in, or try again later.");
-    }
-    if (confirmed.status !== "succeeded") {
+      if (failure.kind === "unknown") {
+        throw new HttpError(502, "payment_unavailable", "The payment service did not answer. Your account is on hold; wait a few minutes and try signing in, or try again later.");
+      }
       throw new HttpError(502, "payment_unavailable", "The payment has not gone through yet. Wait a few minutes, then try signing in.");
     }
-    await activatePass(ctx.db, { id: confirmed.id, amount: confirmed.amount_received ?? confirmed.amount, currency: confirmed.currency }, pass.months);
+    await activatePass(ctx.db, succeededPayment(charge.intent), pass.months);
 
     const publicUser = toPublicUser(user);
     // passport regenerates the session (new id); the client fetches a new CSRF token afterwards.
@@ -146,7 +143,71 @@ export function createBillingRouter(ctx: AppContext): Router {
     res.status(201).json(response);
   });
 
+  // POST /api/billing/renew RenewPassRequest -> 200 RenewPassResponse | 402 payment_declined | 403 not a "self" account | 409 payment_in_progress
+  router.post("/renew", renewLimiter, requireSelfLearner(ctx), validate({ body: renewPassRequestSchema }), async (req, res) => {
+    const userId = currentUser(req).id;
+    const card = req.body as CardDetails;
+    const { stripe } = await rt.client();
+    await rt.aimFakeWebhooks(req);
+    const intent = await createPassIntent(stripe, pass, ctx.logger, { renewal: "true" });
+    if (!intent) throw new HttpError(502, "payment_unavailable", "The payment service is not available right now. Nothing was charged and your pass is unchanged; try again later.");
+
+    // One renewal at a time per account (a double click must not pay twice); the check and the new row share one write.
+    await ctx.db.write(async (transaction) => {
+      const { StudyPass } = ctx.db.models;
+      const inFlight = await StudyPass.findOne({ where: { userId, status: "pending", updatedAt: { [Op.gt]: new Date(Date.now() - ABANDONED_AFTER_MS) } }, transaction });
+      if (inFlight) throw new HttpError(409, "payment_in_progress", "A payment for your pass is still being processed. Wait a few minutes, then check your pass before paying again.");
+      await StudyPass.create({ userId, providerPaymentId: intent.id, amountMinor: pass.amountMinor, currency: pass.currency, status: "pending" }, { transaction });
+      await recordAudit(ctx.db, { actorId: userId, action: "billing.renewal_started", targetType: "user", targetId: userId, details: { paymentId: intent.id }, ip: req.ip }, transaction);
+    });
+
+    const charge = await confirmWithCard(stripe, intent.id, card, ctx.logger);
+    if (!charge.ok) {
+      const { failure } = charge;
+      if (failure.kind === "declined" || failure.kind === "refused") {
+        // No money moved: drop the pending row so nothing looks paid and the next attempt is not blocked.
+        await ctx.db.write(async (transaction) => {
+          await ctx.db.models.StudyPass.destroy({ where: { providerPaymentId: intent.id, status: "pending" }, transaction });
+          const details = { paymentId: intent.id, code: failure.code, declineCode: failure.kind === "declined" ? failure.declineCode : null };
+          await recordAudit(ctx.db, { actorId: userId, action: "billing.renewal_declined", targetType: "user", targetId: userId, details, ip: req.ip }, transaction);
+        });
+        if (failure.kind === "refused") {
+          throw new HttpError(502, "payment_unavailable", "The payment service refused the request. Nothing was charged and your pass is unchanged; try again later.");
+        }
+        throw new HttpError(402, "payment_declined", `${failure.message} Nothing was charged and your pass is unchanged; you can try again.`, { cardNumber: [failure.message] });
+      }
+      // The payment may still go through; the provider's webhook then activates the pending row.
+      throw new HttpError(502, "payment_unavailable", "The payment service has not confirmed the payment yet. Wait a few minutes and check your pass before paying again.");
+    }
+    const outcome = await activatePass(ctx.db, succeededPayment(charge.intent), pass.months);
+    if (outcome !== "activated" && outcome !== "already_active") {
+      ctx.logger.warn("renewal not activated", { paymentId: intent.id, outcome });
+      throw new HttpError(502, "payment_unavailable", "The payment could not be matched to your pass. Contact the school office before paying again.");
+    }
+    const until = await latestPassValidUntil(ctx.db, userId);
+    const response: RenewPassResponse = { passValidUntil: until!.toISOString() };
+    res.json(response);
+  });
+
   return router;
+}
+
+/**
+ * Renewal is for signed-in "self" accounts (role student, kind "self"): 401 signed out; 403 with a
+ * plain reason for staff and for school students, whose access comes from the school.
+ */
+function requireSelfLearner(ctx: AppContext) {
+  return async (req: Request, _res: unknown, next: () => void) => {
+    const { id, role } = currentUser(req);
+    if (role !== "student") {
+      throw new HttpError(403, "forbidden", "Self-study passes are for self-learner accounts; instructor and admin accounts have access through the school.");
+    }
+    const user = await ctx.db.read(() => ctx.db.models.User.findByPk(id, { attributes: ["id", "kind"] }));
+    if (user?.kind !== "self") {
+      throw new HttpError(403, "forbidden", "Your school provides your access, so there is no pass to renew. Ask your instructor if lessons do not open.");
+    }
+    next();
+  };
 }
 
 /**

@@ -1,5 +1,5 @@
 /**
- * Self-study pass: the offer shown on /join and the purchase request. Card details go to the
+ * Self-study pass: the offer shown on /join, the purchase and the renewal requests. Card details go to the
  * server only to be passed through to the payment provider in one call; they are never stored or
  * logged (see server/billing/).
  */
@@ -45,6 +45,20 @@ export const purchasePassRequestSchema = z.strictObject({
   cardCvc: cardCvcSchema,
 });
 export type PurchasePassRequest = z.input<typeof purchasePassRequestSchema>;
+
+/** POST /api/billing/renew (signed-in "self" accounts): the card only; the account is the session's. */
+export const renewPassRequestSchema = z.strictObject({
+  cardNumber: cardNumberSchema,
+  cardExpiry: cardExpirySchema,
+  cardCvc: cardCvcSchema,
+});
+export type RenewPassRequest = z.input<typeof renewPassRequestSchema>;
+
+/** POST /api/billing/renew -> 200 */
+export interface RenewPassResponse {
+  /** ISO 8601: the new end of the pass (months after the later of now and the old end). */
+  passValidUntil: string;
+}
 
 /** Month and four-digit year from a valid "MM/YY" or "MM/YYYY". */
 export function parseExpiry(expiry: string): { month: number; year: number } {

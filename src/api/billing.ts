@@ -1,9 +1,10 @@
-/** Self-study pass: the offer and the purchase (server: server/routes/billing.ts). */
+/** Self-study pass: the offer, the purchase and the renewal (server: server/routes/billing.ts). */
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import type { SessionResponse } from "@shared/api/auth";
-import type { PassOffer, PurchasePassRequest } from "@shared/api/billing";
+import type { PassOffer, PurchasePassRequest, RenewPassRequest, RenewPassResponse } from "@shared/api/billing";
 import { authQueryKeys } from "./auth";
 import { api, refreshCsrfToken, resetCsrfToken } from "./client";
+import { meQueryKeys } from "./me";
 
 export const passOfferQueryOptions = () =>
   queryOptions({
@@ -26,5 +27,14 @@ export function usePurchasePass() {
       queryClient.setQueryData(authQueryKeys.me(), user);
       await refreshCsrfToken().catch(() => resetCsrfToken());
     },
+  });
+}
+
+/** Renew the signed-in self-learner's pass; the home summary (pass end date) is refetched. */
+export function useRenewPass() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (request: RenewPassRequest) => api.post<RenewPassResponse>("/api/billing/renew", request),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: meQueryKeys.all }),
   });
 }

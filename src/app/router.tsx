@@ -45,7 +45,8 @@ export function createAppRouter(queryClient: QueryClient) {
               loader: redirectIfSignedIn(queryClient),
               lazy: () => import("./routes/sign-in"),
             },
-            { path: paths.join, loader: redirectIfSignedIn(queryClient), lazy: () => import("@/features/join/join-page") },
+            // Signed out: buy a pass; signed in: renew it (self-learners) or a note (school accounts).
+            { path: paths.join, lazy: () => import("@/features/join/join-page") },
             { path: paths.lab, lazy: () => import("./routes/lab-index") },
             { path: routePatterns.labSimulation, lazy: () => import("./routes/lab-simulation") },
             { path: "/invite/:token", lazy: () => import("@/features/invite/accept-page") },

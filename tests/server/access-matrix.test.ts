@@ -19,8 +19,9 @@ const ACTORS: Actor[] = ["anonymous", "student", "instructor (other cohort)", "i
  * cohort: object-level rule on :cohortId (other instructor -> 404).
  * staff:  any instructor or admin; lists and creates are scoped to the caller (no 404 case).
  * admin:  admins only.
+ * self:   signed-in "self" (self-study) accounts only; every actor here is a school account, so all get 403.
  */
-type Scope = "cohort" | "staff" | "admin";
+type Scope = "cohort" | "staff" | "admin" | "self";
 
 interface Cell {
   params: Record<string, number>;
@@ -167,11 +168,13 @@ const ROWS: Row[] = [
   { method: "GET", path: "/api/audit-log", scope: "admin", ok: 200 },
   // The notebook review queue: staff only; each instructor sees their own students' entries.
   { method: "GET", path: "/api/notebook/review", scope: "staff", ok: 200 },
+  // Renewing a self-study pass: a valid test card, so a wrongly allowed call would pay and change the database.
+  { method: "POST", path: "/api/billing/renew", scope: "self", ok: 200, setup: async () => ({ params: {}, body: { cardNumber: "4242 4242 4242 4242", cardExpiry: "12/34", cardCvc: "123" } }) },
 ];
 
 function expected(row: Row, actor: Actor): number {
   if (actor === "anonymous") return 401;
-  if (actor === "student") return 403;
+  if (actor === "student" || row.scope === "self") return 403;
   if (row.scope === "admin") return actor === "admin" ? row.ok : 403;
   if (row.scope === "cohort" && actor === "instructor (other cohort)") return 404;
   return row.ok;

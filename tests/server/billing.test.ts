@@ -2,12 +2,14 @@
  * Self-study pass purchase against the in-process fake payment service (server/billing/):
  * success signs in and activates a pass; a decline leaves no account and the same e-mail can
  * retry; webhooks are verified (bad signature = 400, nothing changes) and idempotent (a replay
- * adds nothing); "self" accounts without a valid pass cannot sign in / use lessons and quizzes.
+ * adds nothing); "self" accounts without a valid pass cannot sign in / use lessons and quizzes;
+ * a signed-in "self" account renews (early = extends from the current end, lapsed = from now).
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import request from "supertest";
 import Stripe from "stripe";
 import type { ModulesResponse } from "../../shared/api/lessons";
+import type { MeSummary } from "../../shared/api/me";
 import { formatMoney, luhnValid, purchasePassRequestSchema } from "../../shared/api/billing";
 import { billingRuntimeOf } from "../../server/billing/runtime";
 import { passValidUntil } from "../../server/billing/passes";
@@ -297,5 +299,170 @@ describe("self accounts without a valid pass", () => {
     expect((await s.agent.get(`/api/quizzes/${quizId}`)).status).toBe(200);
     expect((await request(t.app).get(`/api/quizzes/${quizId}`)).status).toBe(401);
     expect((await request(t.app).get(`/api/lessons/${lessonSlug}/progress`)).status).toBe(401);
+  });
+});
+
+describe("POST /api/billing/renew", () => {
+  const DAY_MS = 86_400_000;
+  const card = (overrides: Record<string, unknown> = {}) => ({ cardNumber: CARD_OK, cardExpiry: "12/34", cardCvc: "123", ...overrides });
+
+  /** A signed-in "self" account whose only paid pass ends at `validUntil`. */
+  async function selfLearner(validUntil: Date) {
+    n += 1;
+    const user = await createUser(t, { email: `renew-${n}@self.test`, role: "student", password: PASSWORD });
+    await t.db.write(async (tx) => {
+      await t.db.models.User.update({ kind: "self" }, { where: { id: user.id }, transaction: tx });
+      await t.db.models.StudyPass.create({ userId: user.id, providerPaymentId: `pi_first_${n}`, amountMinor: 3900, currency: "eur", status: "succeeded", paidAt: new Date(validUntil.getTime() - 365 * DAY_MS), validUntil }, { transaction: tx });
+    });
+    return { ...(await signIn(t.app, user.email, PASSWORD)), user };
+  }
+  const passRows = (userId: number) => t.db.models.StudyPass.findAll({ where: { userId }, order: [["id", "ASC"]] });
+  const summaryOf = async (agent: Awaited<ReturnType<typeof selfLearner>>["agent"]) => (await agent.get("/api/me/summary").expect(200)).body as MeSummary;
+
+  it("while the pass still runs: the new 12 months start at the current end (no overlap), the webhook counted once", async () => {
+    const currentEnd = new Date(Date.now() + 40 * DAY_MS);
+    const s = await selfLearner(currentEnd);
+    const before = await counts();
+    const res = await s.agent.post("/api/billing/renew").set("x-csrf-token", s.csrfToken).send(card());
+    expect(res.status).toBe(200);
+    // Calendar months in UTC from the old end: the same rule as passValidUntil, checked in "shared helpers".
+    expect(res.body).toEqual({ passValidUntil: passValidUntil(currentEnd, 12).toISOString() });
+
+    const rows = await passRows(s.user.id);
+    expect(rows.map((r) => r.status)).toEqual(["succeeded", "succeeded"]);
+    expect(rows[0].validUntil).toEqual(currentEnd); // the old pass is left as it was
+    expect(rows[1]).toMatchObject({ amountMinor: 3900, currency: "eur" });
+    expect(rows[1].validUntil!.toISOString()).toBe(res.body.passValidUntil);
+    expect(await counts()).toEqual({ users: before.users, passes: before.passes + 1, events: before.events + 1 });
+    const event = await t.db.models.BillingEvent.findOne({ where: { providerPaymentId: rows[1].providerPaymentId } });
+    expect(event?.type).toBe("payment_intent.succeeded");
+
+    // The home summary shows the new end; a replayed webhook event changes nothing.
+    const summary = await summaryOf(s.agent);
+    expect(summary.role === "student" && summary.selfStudy).toEqual({ passValidUntil: res.body.passValidUntil });
+    const last = (await fake()).deliveries.at(-1)!;
+    const replay = await request(t.app).post("/api/billing/webhook").set("content-type", "application/json").set("stripe-signature", last.signature).send(last.payload);
+    expect(replay.body).toEqual({ received: true, outcome: "duplicate" });
+    expect((await passRows(s.user.id)).map((r) => r.validUntil!.toISOString())).toEqual([currentEnd.toISOString(), res.body.passValidUntil]);
+  });
+
+  it("after the pass ended: the new 12 months start now, and lessons and quizzes open again", async () => {
+    const s = await selfLearner(new Date("2025-03-01T10:00:00Z"));
+    expect((await s.agent.get(`/api/quizzes/${quizId}`)).status).toBe(402);
+    const startedMs = Date.now();
+    const res = await s.agent.post("/api/billing/renew").set("x-csrf-token", s.csrfToken).send(card());
+    const endedMs = Date.now();
+    expect(res.status).toBe(200);
+    const newEnd = new Date(res.body.passValidUntil).getTime();
+    expect(newEnd).toBeGreaterThanOrEqual(passValidUntil(new Date(startedMs), 12).getTime());
+    expect(newEnd).toBeLessThanOrEqual(passValidUntil(new Date(endedMs), 12).getTime());
+    expect((await s.agent.get(`/api/quizzes/${quizId}`)).status).toBe(200);
+    expect((await s.agent.get(`/api/lessons/${lessonSlug}/progress`)).status).toBe(200);
+  });
+
+  it("declined: 402 with the provider's message, nothing stored as paid, the old end date stands", async () => {
+    const oldEnd = new Date("2025-06-30T12:00:00Z");
+    const s = await selfLearner(oldEnd);
+    const before = await counts();
+    const res = await s.agent.post("/api/billing/renew").set("x-csrf-token", s.csrfToken).send(card({ cardNumber: CARD_DECLINED }));
+    expect(res.status).toBe(402);
+    expect(res.body.error.code).toBe("payment_declined");
+    expect(res.body.error.message).toMatch(/^Your card was declined\. Nothing was charged and your pass is unchanged/);
+    expect(res.body.error.fields).toEqual({ cardNumber: ["Your card was declined."] });
+    expect(await counts()).toEqual(before);
+    const rows = await passRows(s.user.id);
+    expect(rows).toHaveLength(1);
+    expect(rows[0].validUntil).toEqual(oldEnd);
+    const summary = await summaryOf(s.agent);
+    expect(summary.role === "student" && summary.selfStudy).toEqual({ passValidUntil: oldEnd.toISOString() });
+    // Not blocked as "in progress": the good card goes through right after.
+    expect((await s.agent.post("/api/billing/renew").set("x-csrf-token", s.csrfToken).send(card())).status).toBe(200);
+  });
+
+  it("a renewal still being processed blocks a second one (409), so a double click cannot pay twice", async () => {
+    const s = await selfLearner(new Date(Date.now() + 10 * DAY_MS));
+    await t.db.write((tx) => t.db.models.StudyPass.create({ userId: s.user.id, providerPaymentId: `pi_inflight_${n}`, amountMinor: 3900, currency: "eur" }, { transaction: tx }));
+    const before = await counts();
+    const res = await s.agent.post("/api/billing/renew").set("x-csrf-token", s.csrfToken).send(card());
+    expect(res.status).toBe(409);
+    expect(res.body.error.code).toBe("payment_in_progress");
+    expect(await counts()).toEqual(before);
+  });
+
+  it("school students and staff get 403 with the reason, signed-out callers 401, no CSRF token 403; nothing changes", async () => {
+    const before = await counts();
+    const deliveries = (await fake()).deliveries.length;
+    const school = await newStudent(t);
+    const denied = await school.agent.post("/api/billing/renew").set("x-csrf-token", school.csrfToken).send(card());
+    expect(denied.status).toBe(403);
+    expect(denied.body.error).toEqual({ code: "forbidden", message: expect.stringMatching(/^Your school provides your access/) });
+
+    const instructor = await createUser(t, { email: `teacher-${++n}@cinderfield.test`, role: "instructor", password: PASSWORD });
+    const staff = await signIn(t.app, instructor.email, PASSWORD);
+    const staffRes = await staff.agent.post("/api/billing/renew").set("x-csrf-token", staff.csrfToken).send(card());
+    expect(staffRes.status).toBe(403);
+    expect(staffRes.body.error.message).toMatch(/instructor and admin accounts have access through the school/);
+
+    const anon = await csrfAgent(t.app);
+    const signedOut = await anon.agent.post("/api/billing/renew").set("x-csrf-token", anon.csrfToken).send(card());
+    expect(signedOut.status).toBe(401);
+    expect(signedOut.body.error.code).toBe("unauthenticated");
+
+    const s = await selfLearner(new Date("2025-01-01T00:00:00Z"));
+    const noToken = await s.agent.post("/api/billing/renew").send(card());
+    expect(noToken.status).toBe(403);
+    expect(noToken.body.error.code).toBe("csrf_failed");
+    expect((await counts()).passes).toBe(before.passes + 1); // only selfLearner's own first pass
+    expect((await fake()).deliveries.length).toBe(deliveries);
+  });
+
+  it("validation errors name the card fields only; account fields are refused", async () => {
+    const s = await selfLearner(new Date("2025-01-01T00:00:00Z"));
+    const empty = await s.agent.post("/api/billing/renew").set("x-csrf-token", s.csrfToken).send({});
+    expect(empty.status).toBe(400);
+    expect(empty.body.error.code).toBe("validation_failed");
+    expect(Object.keys(empty.body.error.fields).sort()).toEqual(["cardCvc", "cardExpiry", "cardNumber"]);
+    const bad = await s.agent.post("/api/billing/renew").set("x-csrf-token", s.csrfToken).send({ cardNumber: "4242 4242 4242 4241", cardExpiry: "13/30", cardCvc: "12" });
+    expect(bad.body.error.fields).toEqual({
+      cardNumber: ["Check the card number: it has a typing mistake."],
+      cardExpiry: ["Enter the expiry date as MM/YY."],
+      cardCvc: ["Enter the 3 or 4 digit security code."],
+    });
+    const extra = await s.agent.post("/api/billing/renew").set("x-csrf-token", s.csrfToken).send(card({ email: "someone-else@self.test" }));
+    expect(extra.status).toBe(400);
+    expect((await passRows(s.user.id))).toHaveLength(1);
+  });
+
+  it("is rate limited per IP", async () => {
+    const limited = await createTestApp({ env: { LOGIN_RATE_LIMIT: "2" } });
+    try {
+      const user = await createUser(limited, { email: "limited@self.test", role: "student", password: PASSWORD });
+      await limited.db.write(async (tx) => {
+        await limited.db.models.User.update({ kind: "self" }, { where: { id: user.id }, transaction: tx });
+        await limited.db.models.StudyPass.create({ userId: user.id, providerPaymentId: "pi_limited", amountMinor: 3900, currency: "eur", status: "succeeded", paidAt: new Date(), validUntil: new Date(Date.now() + DAY_MS) }, { transaction: tx });
+      });
+      const { agent, csrfToken } = await signIn(limited.app, user.email, PASSWORD);
+      const statuses: number[] = [];
+      for (let i = 0; i < 3; i += 1) statuses.push((await agent.post("/api/billing/renew").set("x-csrf-token", csrfToken).send({})).status);
+      expect(statuses).toEqual([400, 400, 429]);
+    } finally {
+      await limited.cleanup();
+    }
+  });
+});
+
+describe("GET /api/me/summary: selfStudy", () => {
+  it("a self account gets its pass end date; a school student gets null", async () => {
+    const { res } = await purchase(buyer());
+    expect(res.status).toBe(201);
+    const [row] = await t.db.models.StudyPass.findAll({ where: { userId: res.body.user.id } });
+    const self = await signIn(t.app, res.body.user.email, PASSWORD);
+    const summary = (await self.agent.get("/api/me/summary").expect(200)).body as MeSummary;
+    expect(summary).toMatchObject({ role: "student", selfStudy: { passValidUntil: row.validUntil!.toISOString() } });
+
+    const school = await newStudent(t);
+    const schoolSummary = (await school.agent.get("/api/me/summary").expect(200)).body as MeSummary;
+    expect(schoolSummary.role).toBe("student");
+    expect(schoolSummary.role === "student" && schoolSummary.selfStudy).toBeNull();
   });
 });

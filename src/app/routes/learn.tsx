@@ -116,11 +116,11 @@ function SelfStudyPass({ passValidUntil }: { passValidUntil: string | null }) {
           <>
             <p className="leading-relaxed text-soot-800">
               {passValidUntil
-                ? `Your pass ended on ${formatDate(passValidUntil)}. Your progress is kept; a new pass opens the lessons and quizzes again.`
+                ? `Your pass ended on ${formatDate(passValidUntil)}. Your progress is kept; renewing opens the lessons and quizzes again.`
                 : "Your pass is not active yet. A pass opens the lessons and quizzes; the simulation lab is open to everyone."}
             </p>
             <Link to={paths.join} className={buttonClasses("primary", "md", "mt-4")}>
-              Get a self-study pass
+              {passValidUntil ? "Renew your self-study pass" : "Get a self-study pass"}
             </Link>
           </>
         )}

@@ -2,12 +2,14 @@
  * /join: buy a self-study pass. One form creates the account (name, e-mail, password) and pays
  * through the server; on success the person is signed in and lands on /learn. A declined card
  * shows the provider's message and leaves no account, so the same e-mail can try again.
+ * Signed in, the page renews a self-learner's pass instead (renew-pass.tsx).
  */
 import { useState } from "react";
 import { useNavigate } from "react-router";
 import { z } from "zod";
 import { formatMoney, purchasePassRequestSchema, type PassOffer, type PurchasePassRequest } from "@shared/api/billing";
 import { isApiError } from "@/api/client";
+import { useMe } from "@/api/auth";
 import { usePassOffer, usePurchasePass } from "@/api/billing";
 import { messageFor } from "@/api/errors";
 import { Alert } from "@/components/ui/alert";
@@ -17,12 +19,20 @@ import { TextField } from "@/components/ui/field";
 import { PageBody, PageHeader } from "@/components/ui/page-header";
 import { Spinner } from "@/components/ui/spinner";
 import { paths } from "@/config/paths";
+import { CardFields, EMPTY_CARD, TestCardNote } from "./card-fields";
+import { SignedInJoin } from "./renew-pass";
 
 type FieldName = keyof PurchasePassRequest;
 const FIELDS: FieldName[] = ["displayName", "email", "password", "cardNumber", "cardExpiry", "cardCvc"];
-const EMPTY: PurchasePassRequest = { displayName: "", email: "", password: "", cardNumber: "", cardExpiry: "", cardCvc: "" };
+const EMPTY: PurchasePassRequest = { displayName: "", email: "", password: "", ...EMPTY_CARD };
 
 export function Component() {
+  const { data: user } = useMe();
+  // Signed in: renew a self-study pass, or learn that the school provides access (renew-pass.tsx).
+  return user ? <SignedInJoin user={user} /> : <BuyPass />;
+}
+
+function BuyPass() {
   const offer = usePassOffer();
   return (
     <>
@@ -65,16 +75,12 @@ function OfferCard({ offer }: { offer: PassOffer }) {
           <li>All lessons, with your progress kept</li>
           <li>All quizzes, graded with feedback</li>
           <li>Saved alloys and your own forge notebook</li>
-          <li>No renewal: the pass simply ends after {offer.months} months</li>
+          <li>No automatic renewal: the pass ends after {offer.months} months unless you renew it here</li>
         </ul>
       </Card>
       {offer.testMode ? (
         <Alert tone="info" title="Demo: test payments only" className="mt-5">
-          <p>
-            This demo uses a built-in test payment service. No real money moves and no card is charged. Use the test card{" "}
-            <span className="font-mono whitespace-nowrap">4242 4242 4242 4242</span> with any future expiry date and any 3 digits;{" "}
-            <span className="font-mono whitespace-nowrap">4000 0000 0000 0002</span> shows a declined card.
-          </p>
+          <TestCardNote />
         </Alert>
       ) : null}
       <p className="mt-5 text-sm text-soot-600">
@@ -117,7 +123,7 @@ function PurchaseForm({ offer }: { offer: PassOffer }) {
         setErrors(Object.fromEntries(FIELDS.map((f) => [f, fields[f]?.[0]])));
       }
       // Never keep card details around after an attempt.
-      setValues((v) => ({ ...v, cardNumber: "", cardExpiry: "", cardCvc: "" }));
+      setValues((v) => ({ ...v, ...EMPTY_CARD }));
     }
   }
 
@@ -153,14 +159,7 @@ function PurchaseForm({ offer }: { offer: PassOffer }) {
               {...field("password")}
             />
           </fieldset>
-          <fieldset className="space-y-4">
-            <legend className="eyebrow text-ember-700">Card{offer.testMode ? " (test card)" : ""}</legend>
-            <TextField label="Card number" autoComplete="cc-number" inputMode="numeric" maxLength={23} {...field("cardNumber")} />
-            <div className="grid grid-cols-2 gap-4">
-              <TextField label="Expiry (MM/YY)" autoComplete="cc-exp" inputMode="numeric" placeholder="MM/YY" maxLength={7} {...field("cardExpiry")} />
-              <TextField label="Security code" autoComplete="cc-csc" inputMode="numeric" maxLength={4} {...field("cardCvc")} />
-            </div>
-          </fieldset>
+          <CardFields testMode={offer.testMode} field={field} />
           <Button type="submit" size="lg" className="w-full" disabled={purchase.isPending}>
             {purchase.isPending ? "Paying…" : `Pay ${formatMoney(offer.amountMinor, offer.currency)} and start learning`}
           </Button>
