@@ -22,7 +22,7 @@ export function Component() {
       <PageHeader
         eyebrow="My learning"
         title={user ? `Welcome back, ${firstName(user.displayName)}` : "My learning"}
-        lede="Your cohorts, what is due next and how far you have come."
+        lede="What is due next, how far you have come, and where to go on."
       />
       <PageBody className="grid grid-cols-1 gap-8 lg:grid-cols-[1fr_20rem] lg:items-start">
         <div className="space-y-10">
@@ -53,16 +53,21 @@ function StudentOverview({ summary }: { summary: StudentSummary }) {
         <h2 id="learn-progress" className="text-2xl font-semibold">
           Progress
         </h2>
-        <StatGrid className="mt-4 md:grid-cols-4">
+        {/* Self-learners have no cohort, so no assignments or due dates to count. */}
+        <StatGrid className={summary.selfStudy ? "mt-4 grid-cols-2" : "mt-4 md:grid-cols-4"}>
           <Stat label="Lessons completed" value={lessonsCompleted} tone="quench" />
           <Stat label="Lessons in progress" value={inProgress} />
-          <Stat label="Assignments" value={assignments} detail={`across ${plural(summary.cohorts.length, "cohort")}`} />
-          <Stat
-            label="Overdue"
-            value={overdue}
-            tone={overdue > 0 ? "ember" : "default"}
-            detail={overdue > 0 ? "Catch up with these first" : "Nothing overdue"}
-          />
+          {summary.selfStudy ? null : (
+            <>
+              <Stat label="Assignments" value={assignments} detail={`across ${plural(summary.cohorts.length, "cohort")}`} />
+              <Stat
+                label="Overdue"
+                value={overdue}
+                tone={overdue > 0 ? "ember" : "default"}
+                detail={overdue > 0 ? "Catch up with these first" : "Nothing overdue"}
+              />
+            </>
+          )}
         </StatGrid>
       </section>
 
@@ -108,9 +113,14 @@ function SelfStudyPass({ passValidUntil }: { passValidUntil: string | null }) {
               Every lesson and quiz is open to you until <strong className="font-mono">{formatDate(passValidUntil)}</strong>. Work through the
               modules in any order; your progress and quiz results are kept here.
             </p>
-            <Link to={paths.modules} className={buttonClasses("primary", "md", "mt-4")}>
-              Go to the modules
-            </Link>
+            <div className="mt-4 flex flex-wrap gap-2">
+              <Link to={paths.modules} className={buttonClasses("primary")}>
+                Go to the modules
+              </Link>
+              <Link to={paths.join} className={buttonClasses("ghost")}>
+                Extend the pass
+              </Link>
+            </div>
           </>
         ) : (
           <>
