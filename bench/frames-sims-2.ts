@@ -40,7 +40,7 @@ async function benchIngot(browser: Browser, baseUrl: string) {
   await page.context().close();
   return {
     description:
-      "ingot section, D2, 1500 mm sand mould, playing at 1×: per frame the recorded frames are interpolated (50 nodes) and the section redrawn in one Konva Shape (100 half-rings, fronts, carbides); slider moves rerun the solver in the Web Worker (time-sliced, 24 ms slices) while the old run stays on screen with a progress bar",
+      "ingot section, D2, 1500 mm sand mould, playing at 1×: per frame the recorded frames are interpolated (50 nodes) and the section redrawn in one Konva Shape (100 half-rings, fronts, carbides); slider moves rerun the solver in the Web Worker (time-sliced, 24 ms slices) while the old run stays on screen with a progress bar; sliderMoves' summaryLatencyMs includes the live summary's 1.5 s announcement throttle (for screen readers), so compute is workerRunPerSliderMove",
     playback,
     workerRunPerSliderMove: {
       computeMs: stats(timings.slice(1).map((t) => t.computeMs)),
