@@ -6,22 +6,11 @@
  * renewal form; paying renews and /learn shows the new end date. A school account on /join gets a
  * note instead. Screenshots at 1280 and 390 px.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launchBrowser, openPage, screenshot, seriousAxeViolations, signIn, startTestServer, fontsReady, VIEWPORTS, type TestServer } from "../support/browser";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { openPage, screenshot, seriousAxeViolations, signIn, fontsReady, VIEWPORTS, useServerAndBrowser } from "../support/browser";
 
-let server: TestServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const env = useServerAndBrowser();
 
 async function fillForm(page: Page, email: string, card: string) {
   await page.getByLabel("Your name").fill("Ilse Marrow");
@@ -35,17 +24,17 @@ async function fillForm(page: Page, email: string, card: string) {
 describe("/join: buying a self-study pass", () => {
   for (const viewport of [VIEWPORTS.desktop, VIEWPORTS.phone]) {
     it(`declined, then paid with the test card, lands on /learn at ${viewport.width} px`, async () => {
-      const { context, page, problems } = await openPage(browser, viewport);
+      const { context, page, problems } = await openPage(env.browser, viewport);
       const email = `ilse-${viewport.width}@self.test`;
       // Both ways in: the landing page's self-learner card (desktop) and the sign-in page (phone).
       if (viewport.width >= 768) {
-        await page.goto(`${server.baseUrl}/`);
+        await page.goto(`${env.server.baseUrl}/`);
         await page.getByRole("link", { name: "Get a self-study pass" }).click();
       } else {
-        await page.goto(`${server.baseUrl}/sign-in`);
+        await page.goto(`${env.server.baseUrl}/sign-in`);
         await page.getByRole("link", { name: "self-study pass" }).click();
       }
-      await page.waitForURL(`${server.baseUrl}/join`);
+      await page.waitForURL(`${env.server.baseUrl}/join`);
       await page.getByRole("heading", { level: 1, name: "Get a self-study pass" }).waitFor();
       await page.getByRole("heading", { level: 2, name: "Self-study pass" }).waitFor(); // the offer has loaded
       const text = await page.locator("main").textContent();
@@ -62,21 +51,21 @@ describe("/join: buying a self-study pass", () => {
       expect(await alert.textContent()).toMatch(/Your card was declined\..*No account was created/);
       expect(await page.getByLabel("Card number").inputValue()).toBe("");
       await screenshot(page, `join-declined-${viewport.width}`);
-      expect(await server.product.db.models.User.count({ where: { email } })).toBe(0);
+      expect(await env.server.product.db.models.User.count({ where: { email } })).toBe(0);
 
       await page.getByLabel("Card number").fill("4242 4242 4242 4242");
       await page.getByLabel("Expiry (MM/YY)").fill("12/34");
       await page.getByLabel("Security code").fill("123");
       await page.getByRole("button", { name: /^Pay €39\.00/ }).click();
-      await page.waitForURL(`${server.baseUrl}/learn`);
+      await page.waitForURL(`${env.server.baseUrl}/learn`);
       await page.getByRole("heading", { level: 1 }).first().waitFor();
       expect(await page.locator("header").textContent()).toMatch(/Ilse Marrow|Sign out|Account/);
       await fontsReady(page);
       await screenshot(page, `join-learn-${viewport.width}`);
 
-      const user = await server.product.db.models.User.findOne({ where: { email } });
+      const user = await env.server.product.db.models.User.findOne({ where: { email } });
       expect(user?.kind).toBe("self");
-      expect(await server.product.db.models.StudyPass.count({ where: { userId: user!.id, status: "succeeded" } })).toBe(1);
+      expect(await env.server.product.db.models.StudyPass.count({ where: { userId: user!.id, status: "succeeded" } })).toBe(1);
       expect(problems.csp).toEqual([]);
       expect(problems.pageErrors).toEqual([]);
       await context.close();
@@ -91,14 +80,14 @@ const shownDate = (page: Page, iso: Date) =>
 describe("/join signed in: renewing a self-study pass", () => {
   for (const viewport of [VIEWPORTS.desktop, VIEWPORTS.phone]) {
     it(`after the pass ends, /learn links to the renewal form; paying shows the new date at ${viewport.width} px`, async () => {
-      const { context, page, problems } = await openPage(browser, viewport);
+      const { context, page, problems } = await openPage(env.browser, viewport);
       const email = `renew-${viewport.width}@self.test`;
-      const { db } = server.product;
-      await page.goto(`${server.baseUrl}/join`);
+      const { db } = env.server.product;
+      await page.goto(`${env.server.baseUrl}/join`);
       await page.getByRole("heading", { level: 2, name: "Self-study pass" }).waitFor();
       await fillForm(page, email, "4242 4242 4242 4242");
       await page.getByRole("button", { name: /^Pay €39\.00/ }).click();
-      await page.waitForURL(`${server.baseUrl}/learn`);
+      await page.waitForURL(`${env.server.baseUrl}/learn`);
 
       // The learner home shows the pass and its end date.
       const user = (await db.models.User.findOne({ where: { email } }))!;
@@ -110,13 +99,13 @@ describe("/join signed in: renewing a self-study pass", () => {
       // The pass ends (set directly in the database): /learn offers the renewal.
       const ended = new Date("2025-02-14T09:00:00Z");
       await db.write((tx) => db.models.StudyPass.update({ validUntil: ended }, { where: { id: first.id }, transaction: tx }));
-      await page.goto(`${server.baseUrl}/learn`);
+      await page.goto(`${env.server.baseUrl}/learn`);
       await passCard.waitFor();
       expect(await passCard.textContent()).toContain(`Your pass ended on ${await shownDate(page, ended)}`);
       await fontsReady(page);
       await screenshot(page, `learn-pass-ended-${viewport.width}`);
       await passCard.getByRole("link", { name: "Renew your self-study pass" }).click();
-      await page.waitForURL(`${server.baseUrl}/join`);
+      await page.waitForURL(`${env.server.baseUrl}/join`);
       await page.getByRole("heading", { level: 1, name: "Renew your self-study pass" }).waitFor();
       const status = page.locator("section", { has: page.getByRole("heading", { level: 2, name: "Self-study pass" }) });
       expect(await status.textContent()).toContain(`Ended on${await shownDate(page, ended)}`);
@@ -157,7 +146,7 @@ describe("/join signed in: renewing a self-study pass", () => {
       await screenshot(page, `join-renewed-${viewport.width}`);
 
       await page.getByRole("link", { name: "Go to my learning" }).click();
-      await page.waitForURL(`${server.baseUrl}/learn`);
+      await page.waitForURL(`${env.server.baseUrl}/learn`);
       await passCard.waitFor();
       expect(await passCard.textContent()).toContain(`until ${newDate}`);
       expect(await passCard.getByRole("link", { name: "Go to the modules" }).count()).toBe(1);
@@ -170,17 +159,17 @@ describe("/join signed in: renewing a self-study pass", () => {
   }
 
   it("a school account sees that the school provides access, with a link to /learn", async () => {
-    const { context, page, problems } = await openPage(browser, VIEWPORTS.phone);
-    await signIn(page, server.baseUrl, "student");
-    await page.waitForURL(`${server.baseUrl}/learn`);
-    await page.goto(`${server.baseUrl}/join`);
+    const { context, page, problems } = await openPage(env.browser, VIEWPORTS.phone);
+    await signIn(page, env.server.baseUrl, "student");
+    await page.waitForURL(`${env.server.baseUrl}/learn`);
+    await page.goto(`${env.server.baseUrl}/join`);
     await page.getByRole("heading", { level: 1, name: "Your school provides your access" }).waitFor();
     expect(await page.getByLabel("Card number").count()).toBe(0);
     await fontsReady(page);
     await screenshot(page, "join-school-390");
     expect(await seriousAxeViolations(page)).toEqual([]);
     await page.getByRole("link", { name: "Go to my learning" }).click();
-    await page.waitForURL(`${server.baseUrl}/learn`);
+    await page.waitForURL(`${env.server.baseUrl}/learn`);
     expect(problems.csp).toEqual([]);
     expect(problems.pageErrors).toEqual([]);
     await context.close();

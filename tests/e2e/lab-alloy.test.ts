@@ -3,22 +3,11 @@
  * comparison lives in the URL and survives a reload; a signed-in student saves a named alloy and
  * finds it again after a reload; axe, CSP, screenshots at desktop and phone width.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { fontsReady, launchBrowser, openPage, screenshot, seriousAxeViolations, signIn, startTestServer, VIEWPORTS, type TestServer } from "../support/browser";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { fontsReady, openPage, screenshot, seriousAxeViolations, signIn, VIEWPORTS, useServerAndBrowser } from "../support/browser";
 
-let server: TestServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const env = useServerAndBrowser();
 
 async function waitForSummary(page: Page, pattern: RegExp, timeout = 30_000): Promise<string> {
   await page.waitForFunction((source) => new RegExp(source).test(document.querySelector("[data-testid=live-summary]")?.textContent ?? ""), pattern.source, { timeout });
@@ -27,8 +16,8 @@ async function waitForSummary(page: Page, pattern: RegExp, timeout = 30_000): Pr
 
 describe("alloy explorer", () => {
   it("recomputes on a slider move, keeps the comparison in the URL and restores it after a reload", async () => {
-    const { context, page, problems } = await openPage(browser);
-    await page.goto(`${server.baseUrl}/lab/alloy?a=440C&a=D2`);
+    const { context, page, problems } = await openPage(env.browser);
+    await page.goto(`${env.server.baseUrl}/lab/alloy?a=440C&a=D2`);
     const before = await waitForSummary(page, /^Comparing AISI 440C and AISI D2\./);
 
     await page.getByRole("slider", { name: "Vanadium (V)" }).fill("3");
@@ -43,7 +32,7 @@ describe("alloy explorer", () => {
     expect(page.url()).toBe(url);
 
     // A shared link with a third alloy opens all three.
-    await page.goto(`${server.baseUrl}/lab/alloy?a=440C&a=D2&a=Cinderfield+V_C1.3_Cr7_V4`);
+    await page.goto(`${env.server.baseUrl}/lab/alloy?a=440C&a=D2&a=Cinderfield+V_C1.3_Cr7_V4`);
     await waitForSummary(page, /Comparing AISI 440C, AISI D2 and Cinderfield V\./);
 
     expect(problems.csp, problems.csp.join("\n")).toEqual([]);
@@ -52,10 +41,10 @@ describe("alloy explorer", () => {
   });
 
   it("lets a signed-in student save a named alloy and open it after a reload", async () => {
-    const { context, page, problems } = await openPage(browser);
-    await signIn(page, server.baseUrl, "student");
-    await page.waitForURL(`${server.baseUrl}/learn`);
-    await page.goto(`${server.baseUrl}/lab/alloy?a=A11`);
+    const { context, page, problems } = await openPage(env.browser);
+    await signIn(page, env.server.baseUrl, "student");
+    await page.waitForURL(`${env.server.baseUrl}/learn`);
+    await page.goto(`${env.server.baseUrl}/lab/alloy?a=A11`);
     await waitForSummary(page, /AISI A11/);
 
     const name = "Cinderfield high-V trial";
@@ -77,8 +66,8 @@ describe("alloy explorer", () => {
 
   for (const viewport of [VIEWPORTS.desktop, VIEWPORTS.phone]) {
     it(`has no serious accessibility violations at ${viewport.width} px`, async () => {
-      const { context, page, problems } = await openPage(browser, viewport);
-      await page.goto(`${server.baseUrl}/lab/alloy?a=440C&a=D2&a=A11`);
+      const { context, page, problems } = await openPage(env.browser, viewport);
+      await page.goto(`${env.server.baseUrl}/lab/alloy?a=440C&a=D2&a=A11`);
       await waitForSummary(page, /^Comparing/);
       await fontsReady(page);
       expect(await seriousAxeViolations(page)).toEqual([]);

@@ -3,22 +3,11 @@
  * live summary, the edge, sharpening and chart views render, axe passes at desktop and phone widths, and the
  * Content-Security-Policy is never violated.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { fontsReady, launchBrowser, openPage, screenshot, seriousAxeViolations, startTestServer, VIEWPORTS, type TestServer } from "../support/browser";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { fontsReady, openPage, screenshot, seriousAxeViolations, VIEWPORTS, useServerAndBrowser } from "../support/browser";
 
-let server: TestServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const env = useServerAndBrowser();
 
 async function waitForSummary(page: Page, pattern: RegExp, timeout = 30_000): Promise<string> {
   await page.waitForFunction(
@@ -31,8 +20,8 @@ async function waitForSummary(page: Page, pattern: RegExp, timeout = 30_000): Pr
 
 describe("carbide simulation", () => {
   it("loads 440C, follows a preset and a slider, and names a particle on hover", async () => {
-    const { context, page, problems } = await openPage(browser);
-    await page.goto(`${server.baseUrl}/lab/carbides`);
+    const { context, page, problems } = await openPage(env.browser);
+    await page.goto(`${env.server.baseUrl}/lab/carbides`);
     const first = await waitForSummary(page, /AISI 440C, hardened from 1050 °C.*M7C3/);
     expect(first).toMatch(/model indices, not lifetimes/);
 
@@ -63,8 +52,8 @@ describe("carbide simulation", () => {
   });
 
   it("shows edge wear, sharpening and the index charts", async () => {
-    const { context, page, problems } = await openPage(browser);
-    await page.goto(`${server.baseUrl}/lab/carbides?grade=A11&view=edge`);
+    const { context, page, problems } = await openPage(env.browser);
+    await page.goto(`${env.server.baseUrl}/lab/carbides?grade=A11&view=edge`);
     await waitForSummary(page, /Edge after 0 cutting cycles/);
     await page.getByRole("button", { name: "Play" }).click();
     await waitForSummary(page, /Edge after [1-9]\d* cutting cycles/);
@@ -90,9 +79,9 @@ describe("carbide simulation", () => {
 
   it("has no serious accessibility violations at desktop and phone widths", async () => {
     for (const viewport of [VIEWPORTS.desktop, VIEWPORTS.phone]) {
-      const { context, page, problems } = await openPage(browser, viewport);
+      const { context, page, problems } = await openPage(env.browser, viewport);
       // A numeric grade id from the URL must stay a grade id.
-      await page.goto(`${server.baseUrl}/lab/carbides?grade=52100&state=annealed`);
+      await page.goto(`${env.server.baseUrl}/lab/carbides?grade=52100&state=annealed`);
       await waitForSummary(page, /SAE 52100, annealed.*M3C/);
       await fontsReady(page);
       expect(await seriousAxeViolations(page)).toEqual([]);

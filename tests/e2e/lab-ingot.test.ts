@@ -3,22 +3,11 @@
  * slider with a new live summary, reads URL parameters, passes axe at desktop and phone width and
  * keeps to the Content-Security-Policy. Screenshots go to tests/artifacts/.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { fontsReady, launchBrowser, openPage, screenshot, seriousAxeViolations, startTestServer, VIEWPORTS, type TestServer } from "../support/browser";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { fontsReady, openPage, screenshot, seriousAxeViolations, VIEWPORTS, useServerAndBrowser } from "../support/browser";
 
-let server: TestServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const env = useServerAndBrowser();
 
 const summary = (page: Page) => page.getByTestId("live-summary");
 
@@ -34,8 +23,8 @@ async function waitForSummary(page: Page, pattern: RegExp, timeout = 60_000): Pr
 
 describe("ingot simulation", () => {
   it("freezes the chosen ingot and updates the summary when the diameter slider moves", async () => {
-    const { context, page, problems } = await openPage(browser);
-    await page.goto(`${server.baseUrl}/lab/ingot?grade=D2&sizeMm=300&element=V`);
+    const { context, page, problems } = await openPage(env.browser);
+    await page.goto(`${env.server.baseUrl}/lab/ingot?grade=D2&sizeMm=300&element=V`);
     // Reduced motion (set by openPage): the frozen ingot is shown at once, paused.
     const before = await waitForSummary(page, /300 mm ingot was fully solid/);
     expect(before).toMatch(/V runs from/);
@@ -55,8 +44,8 @@ describe("ingot simulation", () => {
   });
 
   it("marks coarse primary carbides in a high-vanadium ingot and explains the powder route", async () => {
-    const { context, page } = await openPage(browser);
-    await page.goto(`${server.baseUrl}/lab/ingot?grade=A11&sizeMm=400&mould=metal`);
+    const { context, page } = await openPage(env.browser);
+    await page.goto(`${env.server.baseUrl}/lab/ingot?grade=A11&sizeMm=400&mould=metal`);
     const text = await waitForSummary(page, /fully solid/);
     expect(text).toMatch(/Coarse primary carbides are likely/);
     const panel = page.getByRole("region", { name: "Coarse primary carbides" });
@@ -66,8 +55,8 @@ describe("ingot simulation", () => {
   });
 
   it("opens a grade whose id looks like a number (?grade=1095) at that grade, without a preset error", async () => {
-    const { context, page, problems } = await openPage(browser);
-    await page.goto(`${server.baseUrl}/lab/ingot?grade=1095&sizeMm=200&element=C`);
+    const { context, page, problems } = await openPage(env.browser);
+    await page.goto(`${env.server.baseUrl}/lab/ingot?grade=1095&sizeMm=200&element=C`);
     const text = await waitForSummary(page, /200 mm ingot was fully solid/);
     expect(text).toMatch(/C runs from/);
     expect(await page.getByLabel("Steel", { exact: true }).inputValue()).toBe("1095");
@@ -81,8 +70,8 @@ describe("ingot simulation", () => {
 
   for (const viewport of [VIEWPORTS.desktop, VIEWPORTS.phone]) {
     it(`has no serious accessibility violations at ${viewport.width} px`, async () => {
-      const { context, page, problems } = await openPage(browser, viewport);
-      await page.goto(`${server.baseUrl}/lab/ingot`);
+      const { context, page, problems } = await openPage(env.browser, viewport);
+      await page.goto(`${env.server.baseUrl}/lab/ingot`);
       await waitForSummary(page, /fully solid/);
       await page.getByText("Freezing time (minutes) against casting modulus").waitFor();
       await fontsReady(page);

@@ -3,22 +3,11 @@
  * slider (mouse-free, by keyboard and by the number box) with a new live summary, cuts a scratch, shows the
  * spanning view, passes axe, respects reduced motion and never trips the Content-Security-Policy.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { fontsReady, launchBrowser, openPage, screenshot, seriousAxeViolations, startTestServer, VIEWPORTS, type TestServer } from "../support/browser";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { fontsReady, openPage, screenshot, seriousAxeViolations, VIEWPORTS, useServerAndBrowser } from "../support/browser";
 
-let server: TestServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const env = useServerAndBrowser();
 
 const summary = (page: Page) => page.getByTestId("live-summary");
 
@@ -33,8 +22,8 @@ async function waitForSummary(page: Page, pattern: RegExp, timeout = 30_000): Pr
 
 describe("passive-film simulation", () => {
   it("loads, starts paused under reduced motion, and its summary follows the chromium slider", async () => {
-    const { context, page, problems } = await openPage(browser);
-    await page.goto(`${server.baseUrl}/lab/passive-film`);
+    const { context, page, problems } = await openPage(env.browser);
+    await page.goto(`${env.server.baseUrl}/lab/passive-film`);
     const before = await waitForSummary(page, /13\.0 % Cr.*chromium network/i);
     expect(before).toMatch(/not connected/);
     // prefers-reduced-motion: the animation waits for Play.
@@ -65,8 +54,8 @@ describe("passive-film simulation", () => {
   });
 
   it("opens from URL parameters and shows the spanning-probability view with progress and a result", async () => {
-    const { context, page, problems } = await openPage(browser);
-    await page.goto(`${server.baseUrl}/lab/passive-film?crMassPct=9&view=spanning`);
+    const { context, page, problems } = await openPage(env.browser);
+    await page.goto(`${env.server.baseUrl}/lab/passive-film?crMassPct=9&view=spanning`);
     const text = await waitForSummary(page, /Spanning view.*passes one half at about \d+\.\d % Cr/, 60_000);
     expect(text).toMatch(/free chromium/);
     await expect(page.getByText(/Which neighbour shells really count for passivity is an open question/).isVisible()).resolves.toBe(true);
@@ -79,8 +68,8 @@ describe("passive-film simulation", () => {
 
   it("has no serious accessibility violations and lays out at desktop and phone widths", async () => {
     for (const viewport of [VIEWPORTS.desktop, VIEWPORTS.phone]) {
-      const { context, page, problems } = await openPage(browser, viewport);
-      await page.goto(`${server.baseUrl}/lab/passive-film?crMassPct=19&environment=salt`);
+      const { context, page, problems } = await openPage(env.browser, viewport);
+      await page.goto(`${env.server.baseUrl}/lab/passive-film?crMassPct=19&environment=salt`);
       await waitForSummary(page, /19\.0 % Cr/);
       await page.getByRole("button", { name: "Play" }).click();
       await page.waitForTimeout(2500);

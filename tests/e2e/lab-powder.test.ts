@@ -2,22 +2,11 @@
  * The gas-atomised powder simulation in the built app: droplet classes from its worker, the tower,
  * the comparison ingot, HIP; a slider changes the live summary; axe, CSP, screenshots.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { fontsReady, launchBrowser, openPage, screenshot, seriousAxeViolations, startTestServer, VIEWPORTS, type TestServer } from "../support/browser";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { fontsReady, openPage, screenshot, seriousAxeViolations, VIEWPORTS, useServerAndBrowser } from "../support/browser";
 
-let server: TestServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const env = useServerAndBrowser();
 
 async function waitForSummary(page: Page, pattern: RegExp, timeout = 60_000): Promise<string> {
   await page.waitForFunction((source) => new RegExp(source).test(document.querySelector("[data-testid=live-summary]")?.textContent ?? ""), pattern.source, { timeout });
@@ -42,8 +31,8 @@ async function expectWarningsOncePerMessage(page: Page, atLeast: number) {
 
 describe("powder simulation", () => {
   it("follows the droplets and updates the summary when the gas velocity and the HIP pressure move", async () => {
-    const { context, page, problems } = await openPage(browser);
-    await page.goto(`${server.baseUrl}/lab/powder?grade=A11&gas=N2`);
+    const { context, page, problems } = await openPage(env.browser);
+    await page.goto(`${env.server.baseUrl}/lab/powder?grade=A11&gas=N2`);
     const before = await waitForSummary(page, /times finer than the middle of a 500 mm ingot/);
     expect(before).toMatch(/nitrogen at 100 m\/s/);
 
@@ -63,8 +52,8 @@ describe("powder simulation", () => {
   });
 
   it("opens a numeric-looking grade (?grade=52100) and lists every distinct model warning once, naming the size classes", async () => {
-    const { context, page, problems } = await openPage(browser);
-    await page.goto(`${server.baseUrl}/lab/powder?grade=52100&medianDiameterUm=40`);
+    const { context, page, problems } = await openPage(env.browser);
+    await page.goto(`${env.server.baseUrl}/lab/powder?grade=52100&medianDiameterUm=40`);
     await waitForSummary(page, /times finer/);
     expect(await page.getByText("The preset could not be used").count()).toBe(0);
     expect(await page.getByLabel("Steel", { exact: true }).inputValue()).toBe("52100");
@@ -75,8 +64,8 @@ describe("powder simulation", () => {
 
   for (const viewport of [VIEWPORTS.desktop, VIEWPORTS.phone]) {
     it(`has no serious accessibility violations at ${viewport.width} px`, async () => {
-      const { context, page, problems } = await openPage(browser, viewport);
-      await page.goto(`${server.baseUrl}/lab/powder`);
+      const { context, page, problems } = await openPage(env.browser, viewport);
+      await page.goto(`${env.server.baseUrl}/lab/powder`);
       await waitForSummary(page, /times finer/);
       // The default high-carbon A11 run: 3 warnings about the melt's liquidus and solidus and 2 kinds
       // per class (cooling rate, carbon beyond the arm-spacing fit); the list used to stop at 4.

@@ -5,35 +5,24 @@
  * Screenshots of the lesson and the quiz result at 1280 and 390 px go to tests/artifacts/;
  * axe checks the lesson page.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
 import type { LessonProgress } from "../../shared/api/lessons";
 import type { AttemptHistory } from "../../shared/api/quizzes";
-import { fontsReady, launchBrowser, openPage, screenshot, seriousAxeViolations, signIn, startTestServer, VIEWPORTS, type TestServer } from "../support/browser";
+import { fontsReady, openPage, screenshot, seriousAxeViolations, signIn, VIEWPORTS, useServerAndBrowser } from "../support/browser";
 
 /** A lesson the demo student has not opened in the seed, with a simulation and a quiz. */
 const MODULE = "why-stainless";
 const LESSON = "the-passive-film";
 const LESSON_PATH = `/learn/${MODULE}/${LESSON}`;
 
-let server: TestServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const env = useServerAndBrowser();
 
 async function signedInPage(viewport: { width: number; height: number }) {
-  const opened = await openPage(browser, viewport);
+  const opened = await openPage(env.browser, viewport);
   // Two cores shared with builds and a Monte-Carlo simulation in the page: allow for a slow machine.
   opened.page.setDefaultTimeout(60_000);
-  await signIn(opened.page, server.baseUrl, "student");
+  await signIn(opened.page, env.server.baseUrl, "student");
   await opened.page.waitForURL(/\/learn$/);
   return opened;
 }
@@ -49,7 +38,7 @@ async function readThrough(page: Page) {
 }
 
 async function quizId(page: Page): Promise<string> {
-  const res = await page.request.get(`${server.baseUrl}/api/modules`);
+  const res = await page.request.get(`${env.server.baseUrl}/api/modules`);
   const body = (await res.json()) as { modules: { lessons: { slug: string; quizId: string | null }[] }[] };
   const lesson = body.modules.flatMap((m) => m.lessons).find((l) => l.slug === LESSON);
   expect(lesson?.quizId, "the lesson has a quiz").toBeTruthy();
@@ -59,11 +48,11 @@ async function quizId(page: Page): Promise<string> {
 /** Make sure the student has a stored attempt (so this test does not depend on the one before it). */
 async function ensureAttempt(page: Page) {
   const id = await quizId(page);
-  const history = (await (await page.request.get(`${server.baseUrl}/api/quizzes/${id}/attempts`)).json()) as AttemptHistory;
+  const history = (await (await page.request.get(`${env.server.baseUrl}/api/quizzes/${id}/attempts`)).json()) as AttemptHistory;
   if (history.attempts.length > 0) return;
-  const { csrfToken } = (await (await page.request.get(`${server.baseUrl}/api/auth/csrf`)).json()) as { csrfToken: string };
-  const view = (await (await page.request.get(`${server.baseUrl}/api/quizzes/${id}`)).json()) as { drawId: number };
-  const res = await page.request.post(`${server.baseUrl}/api/quizzes/${id}/attempts`, {
+  const { csrfToken } = (await (await page.request.get(`${env.server.baseUrl}/api/auth/csrf`)).json()) as { csrfToken: string };
+  const view = (await (await page.request.get(`${env.server.baseUrl}/api/quizzes/${id}`)).json()) as { drawId: number };
+  const res = await page.request.post(`${env.server.baseUrl}/api/quizzes/${id}/attempts`, {
     headers: { "x-csrf-token": csrfToken },
     data: { idempotencyKey: `e2e-${Date.now()}`, drawId: view.drawId, answers: {} },
   });
@@ -75,7 +64,7 @@ describe("lesson and quiz, as the demo student", () => {
     const { context, page, problems } = await signedInPage(VIEWPORTS.desktop);
     try {
       // The module list links to the lesson.
-      await page.goto(`${server.baseUrl}/learn/modules`);
+      await page.goto(`${env.server.baseUrl}/learn/modules`);
       await page.locator(`a[href="${LESSON_PATH}"]`).first().click();
       await page.waitForURL(new RegExp(`${LESSON_PATH}$`));
       await page.locator("article.lesson-prose h2[data-section]").first().waitFor();
@@ -118,9 +107,9 @@ describe("lesson and quiz, as the demo student", () => {
 
       // Progress reached the server: opened, several sections, the check answer.
       await expect
-        .poll(async () => ((await (await page.request.get(`${server.baseUrl}/api/lessons/${LESSON}/progress`)).json()) as LessonProgress).sectionsReached.length, { timeout: 10_000 })
+        .poll(async () => ((await (await page.request.get(`${env.server.baseUrl}/api/lessons/${LESSON}/progress`)).json()) as LessonProgress).sectionsReached.length, { timeout: 10_000 })
         .toBeGreaterThanOrEqual(3);
-      const progress = (await (await page.request.get(`${server.baseUrl}/api/lessons/${LESSON}/progress`)).json()) as LessonProgress;
+      const progress = (await (await page.request.get(`${env.server.baseUrl}/api/lessons/${LESSON}/progress`)).json()) as LessonProgress;
       expect(progress.openedAt).not.toBeNull();
       expect(Object.keys(progress.checks).length).toBeGreaterThanOrEqual(1);
 
@@ -141,7 +130,7 @@ describe("lesson and quiz, as the demo student", () => {
       expect(await result.getByText("Why:").count()).toBeGreaterThan(2);
 
       // Stored on the server: exactly one attempt.
-      const history = (await (await page.request.get(`${server.baseUrl}/api/quizzes/${id}/attempts`)).json()) as AttemptHistory;
+      const history = (await (await page.request.get(`${env.server.baseUrl}/api/quizzes/${id}/attempts`)).json()) as AttemptHistory;
       expect(history.attempts).toHaveLength(1);
 
       // Reload: the stored result is shown again, with the history.
@@ -164,7 +153,7 @@ describe("lesson and quiz, as the demo student", () => {
       const { context, page, problems } = await signedInPage(viewport);
       try {
         await ensureAttempt(page);
-        await page.goto(`${server.baseUrl}${LESSON_PATH}`);
+        await page.goto(`${env.server.baseUrl}${LESSON_PATH}`);
         await page.locator("article.lesson-prose h2[data-section]").first().waitFor();
         await fontsReady(page);
         await page.evaluate(() => window.scrollTo(0, 0));
@@ -200,7 +189,7 @@ describe("lesson and quiz, as the demo student", () => {
   it("prints as a clean handout: no site chrome, no simulation canvas, the title kept", { timeout: 180_000 }, async () => {
     const { context, page } = await signedInPage(VIEWPORTS.desktop);
     try {
-      await page.goto(`${server.baseUrl}${LESSON_PATH}`);
+      await page.goto(`${env.server.baseUrl}${LESSON_PATH}`);
       await page.locator("article.lesson-prose h2[data-section]").first().waitFor();
       await page.emulateMedia({ media: "print" });
       const visible = await page.evaluate(() => {

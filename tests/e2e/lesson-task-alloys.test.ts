@@ -4,31 +4,20 @@
  * instructor removes it again from the lesson page. Screenshots of the lesson with the task panel
  * at 1280 and 390 px; axe and CSP checked.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { fontsReady, launchBrowser, openPage, screenshot, seriousAxeViolations, signIn, startTestServer, VIEWPORTS, type TestServer } from "../support/browser";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { fontsReady, openPage, screenshot, seriousAxeViolations, signIn, VIEWPORTS, useServerAndBrowser } from "../support/browser";
 
 const LESSON_PATH = "/learn/choosing-and-treating/steel-for-the-job";
 const ALLOY = "Cinderfield task steel";
 const NOTE = "Compare its free chromium with 440C before the next forge session.";
 
-let server: TestServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const env = useServerAndBrowser();
 
 async function signedIn(role: "student" | "instructor", viewport: { width: number; height: number } = VIEWPORTS.desktop) {
-  const opened = await openPage(browser, viewport);
+  const opened = await openPage(env.browser, viewport);
   opened.page.setDefaultTimeout(60_000);
-  await signIn(opened.page, server.baseUrl, role);
+  await signIn(opened.page, env.server.baseUrl, role);
   await opened.page.waitForURL((url) => !url.pathname.startsWith("/sign-in"));
   return opened;
 }
@@ -39,7 +28,7 @@ describe("alloys attached to a lesson task", () => {
   it("instructor attaches a saved alloy; a student sees it on the lesson and opens it in the explorer", async () => {
     const instructor = await signedIn("instructor");
     const ip = instructor.page;
-    await ip.goto(`${server.baseUrl}/lab/alloy?a=Start_C1.1_Cr12.5_Mo0.8_V0.3`);
+    await ip.goto(`${env.server.baseUrl}/lab/alloy?a=Start_C1.1_Cr12.5_Mo0.8_V0.3`);
     await ip.getByTestId("live-summary").filter({ hasText: "Start" }).waitFor();
     await ip.getByLabel("Save the selected alloy as").fill(ALLOY);
     await ip.getByRole("button", { name: "Save", exact: true }).click();
@@ -58,7 +47,7 @@ describe("alloys attached to a lesson task", () => {
 
     const student = await signedIn("student");
     const sp = student.page;
-    await sp.goto(`${server.baseUrl}${LESSON_PATH}`);
+    await sp.goto(`${env.server.baseUrl}${LESSON_PATH}`);
     const panel = taskPanel(sp);
     await panel.waitFor();
     await expect(panel.textContent()).resolves.toContain(NOTE);
@@ -77,7 +66,7 @@ describe("alloys attached to a lesson task", () => {
   for (const viewport of [VIEWPORTS.desktop, VIEWPORTS.phone]) {
     it(`shows the task panel cleanly at ${viewport.width} px`, async () => {
       const { context, page, problems } = await signedIn("student", viewport);
-      await page.goto(`${server.baseUrl}${LESSON_PATH}`);
+      await page.goto(`${env.server.baseUrl}${LESSON_PATH}`);
       const panel = taskPanel(page);
       await panel.waitFor();
       await fontsReady(page);
@@ -94,18 +83,18 @@ describe("alloys attached to a lesson task", () => {
 
   it("lets the instructor who attached it remove it from the lesson page", async () => {
     const { context, page } = await signedIn("instructor");
-    await page.goto(`${server.baseUrl}${LESSON_PATH}`);
+    await page.goto(`${env.server.baseUrl}${LESSON_PATH}`);
     const panel = taskPanel(page);
     const item = panel.getByRole("listitem").filter({ hasText: ALLOY });
     await item.getByRole("button", { name: "Remove from this lesson" }).click();
     await item.getByRole("button", { name: "Remove", exact: true }).click();
     await item.waitFor({ state: "detached" });
 
-    const res = await page.request.get(`${server.baseUrl}/api/lessons/steel-for-the-job/attached-alloys`);
+    const res = await page.request.get(`${env.server.baseUrl}/api/lessons/steel-for-the-job/attached-alloys`);
     const body = (await res.json()) as { attachments: { name: string }[] };
     expect(body.attachments.map((a) => a.name)).not.toContain(ALLOY);
     // The saved alloy itself stays in the instructor's list.
-    const saved = (await (await page.request.get(`${server.baseUrl}/api/alloys`)).json()) as { alloys: { name: string }[] };
+    const saved = (await (await page.request.get(`${env.server.baseUrl}/api/alloys`)).json()) as { alloys: { name: string }[] };
     expect(saved.alloys.map((a) => a.name)).toContain(ALLOY);
     await context.close();
   });

@@ -3,36 +3,22 @@
  * in the built app served by Express. Also checks that the first page stays light (no konva,
  * no mathjs) and that the strict Content-Security-Policy is never violated.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
+import { describe, expect, it } from "vitest";
 import {
   fontsReady,
-  launchBrowser,
   openPage,
   screenshot,
   seriousAxeViolations,
-  startTestServer,
   VIEWPORTS,
-  type TestServer,
+  useServerAndBrowser,
 } from "../support/browser";
 
-let server: TestServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const env = useServerAndBrowser();
 
 describe("landing page", () => {
   it("says what the product is, links to sign-in, and loads no simulation libraries", async () => {
-    const { context, page, problems } = await openPage(browser);
-    await page.goto(`${server.baseUrl}/`);
+    const { context, page, problems } = await openPage(env.browser);
+    await page.goto(`${env.server.baseUrl}/`);
 
     await page.getByRole("heading", { level: 1, name: /see the steel/i }).waitFor();
     const lede = await page.locator("main").textContent();
@@ -41,7 +27,7 @@ describe("landing page", () => {
     expect(lede).toMatch(/learning on their own|self-learners/i);
 
     await page.getByRole("link", { name: "Sign in to your school" }).click();
-    await page.waitForURL(`${server.baseUrl}/sign-in`);
+    await page.waitForURL(`${env.server.baseUrl}/sign-in`);
     await page.getByRole("heading", { level: 1, name: "Sign in" }).waitFor();
 
     // The first page must not download the heavy simulation stack.
@@ -54,14 +40,14 @@ describe("landing page", () => {
 
   for (const viewport of [VIEWPORTS.desktop, VIEWPORTS.phone]) {
     it(`has no serious accessibility violations on the landing and sign-in pages at ${viewport.width} px`, async () => {
-      const { context, page, problems } = await openPage(browser, viewport);
-      await page.goto(`${server.baseUrl}/`);
+      const { context, page, problems } = await openPage(env.browser, viewport);
+      await page.goto(`${env.server.baseUrl}/`);
       await page.getByRole("heading", { level: 1, name: /see the steel/i }).waitFor();
       await fontsReady(page);
       expect(await seriousAxeViolations(page)).toEqual([]);
       await screenshot(page, `landing-${viewport.width}`);
 
-      await page.goto(`${server.baseUrl}/sign-in`);
+      await page.goto(`${env.server.baseUrl}/sign-in`);
       await page.getByLabel("E-mail address").waitFor();
       await fontsReady(page);
       expect(await seriousAxeViolations(page)).toEqual([]);
@@ -74,8 +60,8 @@ describe("landing page", () => {
 
 describe("phone navigation", () => {
   it("opens an accessible menu from a button and follows its links", async () => {
-    const { context, page, problems } = await openPage(browser, VIEWPORTS.phone);
-    await page.goto(`${server.baseUrl}/`);
+    const { context, page, problems } = await openPage(env.browser, VIEWPORTS.phone);
+    await page.goto(`${env.server.baseUrl}/`);
 
     const menuButton = page.getByRole("button", { name: "Menu" });
     await expect(menuButton.getAttribute("aria-expanded")).resolves.toBe("false");
@@ -93,7 +79,7 @@ describe("phone navigation", () => {
 
     await menuButton.click();
     await phoneNav.getByRole("link", { name: "Lab" }).click();
-    await page.waitForURL(`${server.baseUrl}/lab`);
+    await page.waitForURL(`${env.server.baseUrl}/lab`);
     await page.getByRole("heading", { level: 1, name: /models you can take apart/i }).waitFor();
     // The menu closes after navigating.
     await expect(menuButton.getAttribute("aria-expanded")).resolves.toBe("false");
@@ -104,14 +90,14 @@ describe("phone navigation", () => {
 
 describe("simulation lab and unknown pages", () => {
   it("lists every simulation and opens one on its own page", async () => {
-    const { context, page, problems } = await openPage(browser);
-    await page.goto(`${server.baseUrl}/lab`);
+    const { context, page, problems } = await openPage(env.browser);
+    await page.goto(`${env.server.baseUrl}/lab`);
     await page.getByRole("heading", { level: 1, name: /models you can take apart/i }).waitFor();
     const links = page.locator("main ul a");
     await expect(links.count()).resolves.toBe(5);
 
     await page.getByRole("link", { name: /Passive film/ }).first().click();
-    await page.waitForURL(`${server.baseUrl}/lab/passive-film`);
+    await page.waitForURL(`${env.server.baseUrl}/lab/passive-film`);
     await page.getByRole("heading", { level: 1, name: "Passive film" }).waitFor();
     expect(problems.csp, problems.csp.join("\n")).toEqual([]);
     expect(problems.pageErrors).toEqual([]);
@@ -119,10 +105,10 @@ describe("simulation lab and unknown pages", () => {
   });
 
   it("shows a not-found page for an unknown address and an unknown simulation", async () => {
-    const { context, page } = await openPage(browser);
-    await page.goto(`${server.baseUrl}/no/such/page`);
+    const { context, page } = await openPage(env.browser);
+    await page.goto(`${env.server.baseUrl}/no/such/page`);
     await page.getByRole("heading", { level: 1, name: /nothing on this bench/i }).waitFor();
-    await page.goto(`${server.baseUrl}/lab/no-such-simulation`);
+    await page.goto(`${env.server.baseUrl}/lab/no-such-simulation`);
     await page.getByRole("heading", { level: 1, name: /nothing on this bench/i }).waitFor();
     await context.close();
   });

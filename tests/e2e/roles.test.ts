@@ -3,35 +3,22 @@
  * roles are enforced in the UI; a wrong password is explained. Screenshots of every home at
  * desktop and phone width go to tests/artifacts/, and axe checks every home.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
 import { DEMO_ADMIN, DEMO_INSTRUCTORS, DEMO_OTHER_STUDENTS, DEMO_STUDENT } from "../../server/db/seed/demo";
 import {
   DEMO_ACCOUNTS,
   fontsReady,
-  launchBrowser,
   openPage,
   screenshot,
   seriousAxeViolations,
   signIn,
-  startTestServer,
   VIEWPORTS,
   type DemoRole,
-  type TestServer,
+  useServerAndBrowser,
 } from "../support/browser";
 
-let server: TestServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const env = useServerAndBrowser();
 
 const firstName = (displayName: string) => displayName.split(" ")[0];
 
@@ -77,9 +64,9 @@ describe("each demo account lands on its own home", () => {
   for (const role of Object.keys(DEMO_ACCOUNTS) as DemoRole[]) {
     it(`${role}: signs in, sees its data, passes axe, and signs out`, async () => {
       for (const viewport of [VIEWPORTS.desktop, VIEWPORTS.phone]) {
-        const { context, page, problems } = await openPage(browser, viewport);
-        await signIn(page, server.baseUrl, role);
-        await page.waitForURL(`${server.baseUrl}${DEMO_ACCOUNTS[role].home}`);
+        const { context, page, problems } = await openPage(env.browser, viewport);
+        await signIn(page, env.server.baseUrl, role);
+        await page.waitForURL(`${env.server.baseUrl}${DEMO_ACCOUNTS[role].home}`);
         // Client-side navigation changes the URL just before the new page renders: wait for the page itself.
         await page.getByRole("heading", { level: 1, name: HOME_CHECKS[role].heading }).waitFor();
         await HOME_CHECKS[role].check(page);
@@ -95,13 +82,13 @@ describe("each demo account lands on its own home", () => {
         // Sign out: from the header on desktop, from the menu on a phone.
         if (viewport.width < 768) await page.getByRole("button", { name: "Menu" }).click();
         await page.getByRole("button", { name: "Sign out" }).click();
-        await page.waitForURL(`${server.baseUrl}/`);
+        await page.waitForURL(`${env.server.baseUrl}/`);
         await page.getByRole("link", { name: "Sign in to your school" }).waitFor();
 
         // The session is gone on the server, not only in the page.
-        const me = await page.request.get(`${server.baseUrl}/api/auth/me`);
+        const me = await page.request.get(`${env.server.baseUrl}/api/auth/me`);
         expect(me.status()).toBe(401);
-        await page.goto(`${server.baseUrl}${DEMO_ACCOUNTS[role].home}`);
+        await page.goto(`${env.server.baseUrl}${DEMO_ACCOUNTS[role].home}`);
         await page.waitForURL(/\/sign-in\?next=/);
         expect(new URL(page.url()).searchParams.get("next")).toBe(DEMO_ACCOUNTS[role].home);
 
@@ -115,46 +102,46 @@ describe("each demo account lands on its own home", () => {
 
 describe("access rules in the browser", () => {
   it("sends a signed-out visitor to sign-in and back to the page they asked for", async () => {
-    const { context, page } = await openPage(browser);
-    await page.goto(`${server.baseUrl}/account`);
-    await page.waitForURL(`${server.baseUrl}/sign-in?next=%2Faccount`);
+    const { context, page } = await openPage(env.browser);
+    await page.goto(`${env.server.baseUrl}/account`);
+    await page.waitForURL(`${env.server.baseUrl}/sign-in?next=%2Faccount`);
     await page.getByLabel("E-mail address").fill(DEMO_ACCOUNTS.student.email);
     await page.getByLabel("Password").fill(DEMO_ACCOUNTS.student.password);
     await page.getByRole("button", { name: "Sign in", exact: true }).click();
-    await page.waitForURL(`${server.baseUrl}/account`);
+    await page.waitForURL(`${env.server.baseUrl}/account`);
     await page.getByRole("heading", { level: 1, name: "Your account" }).waitFor();
     await context.close();
   });
 
   it("shows a student who opens /teach a clear not-allowed page", async () => {
-    const { context, page, problems } = await openPage(browser);
-    await signIn(page, server.baseUrl, "student");
-    await page.waitForURL(`${server.baseUrl}/learn`);
-    await page.goto(`${server.baseUrl}/teach`);
+    const { context, page, problems } = await openPage(env.browser);
+    await signIn(page, env.server.baseUrl, "student");
+    await page.waitForURL(`${env.server.baseUrl}/learn`);
+    await page.goto(`${env.server.baseUrl}/teach`);
     await page.getByRole("heading", { level: 1, name: "Not allowed" }).waitFor();
     expect(await page.locator("main").textContent()).toMatch(/for instructors/);
     await page.getByRole("link", { name: "Go to your home page" }).click();
-    await page.waitForURL(`${server.baseUrl}/learn`);
+    await page.waitForURL(`${env.server.baseUrl}/learn`);
     await page.getByRole("heading", { level: 1, name: /Welcome back/ }).waitFor();
     expect(problems.csp, problems.csp.join("\n")).toEqual([]);
     await context.close();
   });
 
   it("explains a wrong password and stays on the sign-in page", async () => {
-    const { context, page } = await openPage(browser);
-    await signIn(page, server.baseUrl, "instructor", "not-the-password");
+    const { context, page } = await openPage(env.browser);
+    await signIn(page, env.server.baseUrl, "instructor", "not-the-password");
     const alert = page.getByRole("alert").filter({ hasText: "Sign-in failed" });
     await alert.waitFor();
     expect(await alert.textContent()).toMatch(/do not match/);
     expect(new URL(page.url()).pathname).toBe("/sign-in");
-    const me = await page.request.get(`${server.baseUrl}/api/auth/me`);
+    const me = await page.request.get(`${env.server.baseUrl}/api/auth/me`);
     expect(me.status()).toBe(401);
     await context.close();
   });
 
   it("checks the form before sending it", async () => {
-    const { context, page } = await openPage(browser);
-    await page.goto(`${server.baseUrl}/sign-in`);
+    const { context, page } = await openPage(env.browser);
+    await page.goto(`${env.server.baseUrl}/sign-in`);
     await page.getByLabel("E-mail address").fill("not-an-email");
     await page.getByRole("button", { name: "Sign in", exact: true }).click();
     await page.getByText("Enter a valid e-mail address.").waitFor();

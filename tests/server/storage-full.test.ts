@@ -21,6 +21,7 @@ import { createLogger } from "../../server/log";
 import { errorHandler } from "../../server/middleware/error-handler";
 import { uploadDisk } from "../../server/uploads/store";
 import { CRASH_QUIZ_ID } from "../support/crash-cycles";
+import { newCouponEntry } from "./notebook-fixture";
 import { createTestApp, createUser, signIn, type Agent, type TestApp } from "../support/test-app";
 
 interface RawConnection {
@@ -131,25 +132,7 @@ const pdf = (tag: string) =>
   );
 const photo = () => sharp({ create: { width: 640, height: 480, channels: 3, background: { r: 192, g: 138, b: 69 } } }).png().toBuffer();
 
-async function newEntry(): Promise<number> {
-  const res = await student.agent.post("/api/notebook/entries").set("x-csrf-token", student.csrfToken).send({
-    title: "Storage test coupon",
-    workedOn: "2026-02-01",
-    steel: "grade:1095",
-    normalizingCycles: 2,
-    austenitizeC: 800,
-    soakMinutes: 5,
-    quenchMedium: "brine",
-    coldTreatment: "none",
-    temperCycles: 2,
-    temperC: 205,
-    temperHours: 1,
-    hardness: [{ hrc: 60, spot: "edge" }],
-    notes: "",
-  });
-  expect(res.status, JSON.stringify(res.body)).toBe(201);
-  return res.body.entry.id as number;
-}
+const newEntry = () => newCouponEntry(student, "Storage test coupon");
 
 const upload = (entryId: number, data: Buffer, filename: string) =>
   student.agent.post(`/api/notebook/entries/${entryId}/files`).set("x-csrf-token", student.csrfToken).attach("file", data, { filename, contentType: "application/octet-stream" });

@@ -12,9 +12,10 @@ import zlib from "node:zlib";
 import request from "supertest";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { NotebookEntryResponse, NotebookFile, NotebookFileResponse } from "../../shared/api/notebook";
+import type { NotebookFile, NotebookFileResponse } from "../../shared/api/notebook";
 import { createTestApp, createUser, signIn, type TestApp } from "../support/test-app";
 import { createTeachingWorld, type Signed, type TeachingWorld } from "./teaching-fixture";
+import { newCouponEntry } from "./notebook-fixture";
 
 const MIB = 1024 * 1024;
 let w: TeachingWorld;
@@ -86,28 +87,7 @@ function pdf(extra = ""): Buffer {
 
 // ---- helpers ----------------------------------------------------------------------------------
 
-async function newEntry(s: Signed, title = "Upload test coupon"): Promise<number> {
-  const res = await s.agent
-    .post("/api/notebook/entries")
-    .set("x-csrf-token", s.csrfToken)
-    .send({
-      title,
-      workedOn: "2026-02-01",
-      steel: "grade:1095",
-      normalizingCycles: 2,
-      austenitizeC: 800,
-      soakMinutes: 5,
-      quenchMedium: "brine",
-      coldTreatment: "none",
-      temperCycles: 2,
-      temperC: 205,
-      temperHours: 1,
-      hardness: [{ hrc: 60, spot: "edge" }],
-      notes: "",
-    });
-  expect(res.status, JSON.stringify(res.body)).toBe(201);
-  return (res.body as NotebookEntryResponse).entry.id;
-}
+const newEntry = (s: Signed, title = "Upload test coupon") => newCouponEntry(s, title);
 
 function upload(s: Signed, entryId: number, data: Buffer, filename: string, contentType = "application/octet-stream") {
   return s.agent.post(`/api/notebook/entries/${entryId}/files`).set("x-csrf-token", s.csrfToken).attach("file", data, { filename, contentType });

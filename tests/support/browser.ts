@@ -10,6 +10,7 @@ import type { AddressInfo } from "node:net";
 import type { Server } from "node:http";
 import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
 import AxeBuilder from "@axe-core/playwright";
+import { afterAll, beforeAll } from "vitest";
 import { createApp, type GrainEdgeApp } from "../../server/app";
 import { loadConfig, PROJECT_ROOT } from "../../server/config";
 import { DEMO_PASSWORD } from "../../server/db/seed/demo";
@@ -80,6 +81,23 @@ export async function startTestServer(): Promise<TestServer> {
       fs.rmSync(dataDir, { recursive: true, force: true });
     },
   };
+}
+
+/**
+ * The product and a browser for one test file: started before its tests, closed after them.
+ * Read `env.server` and `env.browser` inside tests (they are set once beforeAll has run).
+ */
+export function useServerAndBrowser(): { server: TestServer; browser: Browser } {
+  const env = {} as { server: TestServer; browser: Browser };
+  beforeAll(async () => {
+    env.server = await startTestServer();
+    env.browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await env.browser?.close();
+    await env.server?.close();
+  });
+  return env;
 }
 
 export function launchBrowser(): Promise<Browser> {

@@ -4,9 +4,7 @@
  * shows the provider's message and leaves no account, so the same e-mail can try again.
  * Signed in, the page renews a self-learner's pass instead (renew-pass.tsx).
  */
-import { useState } from "react";
 import { useNavigate } from "react-router";
-import { z } from "zod";
 import { formatMoney, purchasePassRequestSchema, type PassOffer, type PurchasePassRequest } from "@shared/api/billing";
 import { isApiError } from "@/api/client";
 import { useMe } from "@/api/auth";
@@ -21,9 +19,8 @@ import { Spinner } from "@/components/ui/spinner";
 import { paths } from "@/config/paths";
 import { CardFields, EMPTY_CARD, TestCardNote } from "./card-fields";
 import { SignedInJoin } from "./renew-pass";
+import { usePaymentForm } from "./use-payment-form";
 
-type FieldName = keyof PurchasePassRequest;
-const FIELDS: FieldName[] = ["displayName", "email", "password", "cardNumber", "cardExpiry", "cardCvc"];
 const EMPTY: PurchasePassRequest = { displayName: "", email: "", password: "", ...EMPTY_CARD };
 
 export function Component() {
@@ -97,35 +94,10 @@ function OfferCard({ offer }: { offer: PassOffer }) {
 function PurchaseForm({ offer }: { offer: PassOffer }) {
   const purchase = usePurchasePass();
   const navigate = useNavigate();
-  const [values, setValues] = useState<PurchasePassRequest>(EMPTY);
-  const [errors, setErrors] = useState<Partial<Record<FieldName, string>>>({});
-
-  const field = (name: FieldName) => ({
-    value: values[name],
-    onChange: (e: React.ChangeEvent<HTMLInputElement>) => setValues((v) => ({ ...v, [name]: e.target.value })),
-    error: errors[name],
+  const { field, submit } = usePaymentForm(purchasePassRequestSchema, EMPTY, async (values) => {
+    await purchase.mutateAsync(values);
+    await navigate(paths.learn, { replace: true });
   });
-
-  async function submit(event: React.FormEvent) {
-    event.preventDefault();
-    const parsed = purchasePassRequestSchema.safeParse(values);
-    if (!parsed.success) {
-      const flat = z.flattenError(parsed.error).fieldErrors as Partial<Record<FieldName, string[]>>;
-      return setErrors(Object.fromEntries(FIELDS.map((f) => [f, flat[f]?.[0]])));
-    }
-    setErrors({});
-    try {
-      await purchase.mutateAsync(values);
-      await navigate(paths.learn, { replace: true });
-    } catch (error) {
-      if (isApiError(error) && error.fields) {
-        const fields = error.fields;
-        setErrors(Object.fromEntries(FIELDS.map((f) => [f, fields[f]?.[0]])));
-      }
-      // Never keep card details around after an attempt.
-      setValues((v) => ({ ...v, ...EMPTY_CARD }));
-    }
-  }
 
   const failure = purchase.error;
   const declined = isApiError(failure) && failure.code === "payment_declined";

@@ -3,8 +3,6 @@
  * months at the later of today and the current end, so renewing early loses nothing). School
  * accounts get their access from the school: a short note and a link home instead of a form.
  */
-import { useState } from "react";
-import { z } from "zod";
 import type { PublicUser } from "@shared/api/auth";
 import { formatMoney, renewPassRequestSchema, type PassOffer, type RenewPassRequest } from "@shared/api/billing";
 import { ROLE_HOME } from "@shared/api/roles";
@@ -19,9 +17,8 @@ import { PageBody, PageHeader } from "@/components/ui/page-header";
 import { Spinner } from "@/components/ui/spinner";
 import { formatDay } from "@/lib/format";
 import { CardFields, EMPTY_CARD, TestCardNote } from "./card-fields";
+import { usePaymentForm } from "./use-payment-form";
 
-type FieldName = keyof RenewPassRequest;
-const FIELDS: FieldName[] = ["cardNumber", "cardExpiry", "cardCvc"];
 
 export function SignedInJoin({ user }: { user: PublicUser }) {
   const summary = useMeSummary();
@@ -111,34 +108,9 @@ function PassStatus({ passValidUntil, offer }: { passValidUntil: string | null; 
 
 function RenewForm({ offer }: { offer: PassOffer }) {
   const renew = useRenewPass();
-  const [values, setValues] = useState<RenewPassRequest>(EMPTY_CARD);
-  const [errors, setErrors] = useState<Partial<Record<FieldName, string>>>({});
-
-  const field = (name: FieldName) => ({
-    value: values[name],
-    onChange: (e: React.ChangeEvent<HTMLInputElement>) => setValues((v) => ({ ...v, [name]: e.target.value })),
-    error: errors[name],
+  const { field, submit } = usePaymentForm(renewPassRequestSchema, EMPTY_CARD as RenewPassRequest, async (values) => {
+    await renew.mutateAsync(values);
   });
-
-  async function submit(event: React.FormEvent) {
-    event.preventDefault();
-    const parsed = renewPassRequestSchema.safeParse(values);
-    if (!parsed.success) {
-      const flat = z.flattenError(parsed.error).fieldErrors as Partial<Record<FieldName, string[]>>;
-      return setErrors(Object.fromEntries(FIELDS.map((f) => [f, flat[f]?.[0]])));
-    }
-    setErrors({});
-    try {
-      await renew.mutateAsync(values);
-    } catch (error) {
-      if (isApiError(error) && error.fields) {
-        const fields = error.fields;
-        setErrors(Object.fromEntries(FIELDS.map((f) => [f, fields[f]?.[0]])));
-      }
-    }
-    // Never keep card details around after an attempt.
-    setValues(EMPTY_CARD);
-  }
 
   if (renew.isSuccess) {
     return (
