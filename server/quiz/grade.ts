@@ -69,8 +69,13 @@ export function gradeSingle(question: SingleChoiceQuestion, answer: QuizAnswer |
   });
 }
 
+/** Several options in one line: "a; b", without a sentence's own full stop before each "; ". */
+function optionList(question: MultipleChoiceQuestion, ids: readonly string[]): string {
+  return ids.map((id) => optionText(question, id).replace(/[.;]\s*$/, "")).join("; ");
+}
+
 export function gradeMultiple(question: MultipleChoiceQuestion, answer: QuizAnswer | undefined): QuestionResult {
-  const correctAnswer = question.answers.map((id) => optionText(question, id)).join("; ");
+  const correctAnswer = optionList(question, question.answers);
   if (answer?.kind !== "multiple") return wrongKind(question, correctAnswer, answer);
   const chosen = new Set(answer.choices);
   const wanted = new Set(question.answers);
@@ -85,7 +90,7 @@ export function gradeMultiple(question: MultipleChoiceQuestion, answer: QuizAnsw
     }
   }
   return result(question, correct, {
-    given: answer.choices.length ? answer.choices.map((id) => optionText(question, id)).join("; ") : UNANSWERED,
+    given: answer.choices.length ? optionList(question, answer.choices) : UNANSWERED,
     correctAnswer,
     feedback: notes.length ? notes.join(" ") : undefined,
   });

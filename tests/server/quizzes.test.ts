@@ -10,6 +10,7 @@ import { chromiumAtomFraction } from "../../shared/metallurgy";
 import type { NumericQuestion, QuestionDefinition, SimulationTaskQuestion } from "../../shared/quiz/definition";
 import { drawOnGrid, drawParams, substitutePrompt } from "../../server/quiz/draw";
 import { gradeQuestion, gradeQuiz } from "../../server/quiz/grade";
+import type { MultipleChoiceQuestion } from "../../shared/quiz/definition";
 import { presentQuiz } from "../../server/quiz/present";
 import { loadSimSchemas } from "../../server/quiz/sim-params";
 import { createRandom } from "../../shared/metallurgy/random";
@@ -40,6 +41,24 @@ describe("grading, question by question", () => {
     const extra = gradeQuestion(q, { kind: "multiple", choices: ["v", "cr", "ni"] }, 1);
     expect(extra.correct).toBe(false);
     expect(extra.feedback).toMatch(/Nickel does not form carbides/);
+  });
+
+  it("multiple choice: lists several sentence options on one line without a stray full stop before each separator", () => {
+    const q: MultipleChoiceQuestion = {
+      id: "q-sentences",
+      kind: "multiple",
+      prompt: "Which are true?",
+      explanation: "",
+      options: [
+        { id: "a", text: "Chromium forms a film." },
+        { id: "b", text: "Carbon ties up chromium." },
+        { id: "c", text: "Nickel forms carbides." },
+      ],
+      answers: ["a", "b"],
+    };
+    const r = gradeQuestion(q, { kind: "multiple", choices: ["a", "c"] }, 1);
+    expect(r.correctAnswer).toBe("Chromium forms a film; Carbon ties up chromium");
+    expect(r.given).toBe("Chromium forms a film; Nickel forms carbides");
   });
 
   it("numeric: within and outside the tolerance", () => {
