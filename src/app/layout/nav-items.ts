@@ -16,7 +16,8 @@ const HOME_LABEL: Record<Role, string> = {
 /** The main navigation for whoever is (or is not) signed in. */
 export function navItemsFor(user: PublicUser | null | undefined): NavItem[] {
   const lab: NavItem = { to: paths.lab, label: "Lab" };
-  if (!user) return [lab];
+  // Visitors: the free lab, and the way in for people learning on their own.
+  if (!user) return [lab, { to: paths.join, label: "Self-study pass" }];
   const notebook: NavItem = user.role === "student" ? { to: paths.notebook, label: "Notebook" } : { to: paths.notebookReview, label: "Notebooks" };
   return [{ to: ROLE_HOME[user.role], label: HOME_LABEL[user.role] }, { to: paths.modules, label: "Course" }, notebook, lab, { to: paths.account, label: "Account" }];
 }

@@ -4,8 +4,8 @@ import { navItemsFor } from "@/app/layout/nav-items";
 const user = (role: "student" | "instructor" | "admin") => ({ id: 1, email: "x@y.test", displayName: "X", role });
 
 describe("main navigation", () => {
-  it("offers a signed-out visitor only the public lab", () => {
-    expect(navItemsFor(null).map((i) => i.to)).toEqual(["/lab"]);
+  it("offers a signed-out visitor the public lab and the self-study pass", () => {
+    expect(navItemsFor(null).map((i) => i.to)).toEqual(["/lab", "/join"]);
   });
 
   it("puts each role's own home first", () => {
