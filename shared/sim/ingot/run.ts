@@ -14,7 +14,7 @@ import { INGOT_ELEMENTS, type IngotElement } from "./constants";
 import type { ResolvedIngotSimParams } from "./params";
 import { boundaryLayerForMixing } from "./mixing";
 import { displayArmSpacingUm } from "./arm-spacing";
-import { carbideSizeUm, coarseCarbideRisk, type CarbideRisk } from "./carbide-risk";
+import { carbideSizeUm, coarseCarbideRisk, eutecticCarbonMassPct, type CarbideRisk } from "./carbide-risk";
 
 /** Superheat above the liquidus at pouring, °C [App]. */
 export const POUR_SUPERHEAT_C = 50;
@@ -182,6 +182,12 @@ function finish(
     dendriteCoreMassPct[el] = Float64Array.from(sol.dendriteCoreMassPct);
     // The core reports the solid forming at f_s = 0.95; the liquid it forms from is C_s*/k.
     lastLiquidMassPct[el] = Float64Array.from(sol.interdendriticMassPct, (c) => c / sol.partitionCoefficient);
+  }
+  // A liquid richer in carbon than the eutectic does not exist: once there, the rest freezes as
+  // eutectic (Scheil with a eutectic end point, science-reference §3.1), so C/k above it is capped.
+  const lastC = lastLiquidMassPct.C;
+  if (lastC) {
+    for (let i = 0; i < n; i++) lastC[i] = Math.min(lastC[i], eutecticCarbonMassPct(lastLiquidMassPct.Cr?.[i] ?? 0));
   }
   const carbideRisk: CarbideRisk[] = [];
   const carbideSize = new Float64Array(n);

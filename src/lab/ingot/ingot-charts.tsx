@@ -113,7 +113,8 @@ export function LastLiquidChart({ run }: { run: IngotRun }) {
         <>
           Composition of the liquid that freezes last in each part of the section (at 95 % solid), mass %. Coarse primary vanadium carbide
           (MC) is taken to form where this liquid holds at least {MC_LAST_LIQUID_V_THRESHOLD_MASS_PCT} % V (dotted line); a eutectic with
-          carbide where its carbon reaches the eutectic value (4.3 % C, lowered by chromium). Both thresholds are model choices. The centre
+          carbide where its carbon reaches the eutectic value (4.3 % C, lowered by chromium; the liquid cannot hold more, so carbon stops there).
+          Both thresholds are model choices. The centre
           point is left out.
           {v ? ` V: ${formatMassPct(v[0])} near the wall, ${formatMassPct(v[run.cells - 2])} near the centre.` : " This alloy has no V."}
           {c ? ` C: ${formatMassPct(c[0])} near the wall, ${formatMassPct(c[run.cells - 2])} near the centre.` : ""}

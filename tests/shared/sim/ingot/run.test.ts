@@ -7,6 +7,7 @@ import { describe, expect, it } from "vitest";
 import { createIngotRunner, MAX_FRAMES, runIngot, type IngotRun } from "@shared/sim/ingot/run";
 import { parseIngotSimParams } from "@shared/sim/ingot/params";
 import { chvorinovSweep } from "@shared/sim/ingot/chvorinov-sweep";
+import { eutecticCarbonMassPct } from "@shared/sim/ingot/carbide-risk";
 
 /** Volume of each node of the core's vertex grid in a cylinder (per metre and radian). */
 function nodeVolumes(run: IngotRun): number[] {
@@ -112,5 +113,21 @@ describe("ingot run: physics invariants", () => {
     expect(ratio).toBeGreaterThan(0.5);
     expect(ratio).toBeLessThan(2);
     expect(d2.chvorinov.equivalentConstantMinPerCm2 * d2.chvorinov.modulusCm ** 2 * 60).toBeCloseTo(d2.totalTimeS, 6);
+  });
+});
+
+describe("ingot run: the last interdendritic liquid", () => {
+  it("never holds more carbon than the eutectic (Fe–C 4.30 % C, science-reference §5.2; lowered 0.07 % C per % Cr, an [App] model choice)", () => {
+    const c = d2.final.lastLiquidMassPct.C!;
+    const cr = d2.final.lastLiquidMassPct.Cr!;
+    let capped = 0;
+    for (let i = 0; i < d2.cells; i++) {
+      const eutectic = eutecticCarbonMassPct(cr[i]);
+      expect(c[i]).toBeLessThanOrEqual(eutectic + 1e-12);
+      if (Math.abs(c[i] - eutectic) < 1e-12) capped += 1;
+    }
+    // D2 (1.55 % C, 11.5 % Cr) in sand reaches the eutectic between the arms somewhere in the section.
+    expect(capped).toBeGreaterThan(0);
+    expect(d2.final.carbideRisk.some((r) => r !== "none")).toBe(true);
   });
 });
