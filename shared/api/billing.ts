@@ -84,3 +84,8 @@ export function formatMoney(amountMinor: number, currency: string, locale = "en-
   const digits = format.resolvedOptions().maximumFractionDigits ?? 2;
   return format.format(amountMinor / 10 ** digits);
 }
+
+/** A pass end date (ISO, or null when never paid) still in the future at `now`. */
+export function isPassActive(passValidUntil: string | null, now = Date.now()): boolean {
+  return passValidUntil !== null && new Date(passValidUntil).getTime() > now;
+}

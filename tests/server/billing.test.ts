@@ -10,7 +10,7 @@ import request from "supertest";
 import Stripe from "stripe";
 import type { ModulesResponse } from "../../shared/api/lessons";
 import type { MeSummary } from "../../shared/api/me";
-import { formatMoney, luhnValid, purchasePassRequestSchema } from "../../shared/api/billing";
+import { formatMoney, isPassActive, luhnValid, purchasePassRequestSchema } from "../../shared/api/billing";
 import { billingRuntimeOf } from "../../server/billing/runtime";
 import { passValidUntil } from "../../server/billing/passes";
 import { createTestApp, createUser, csrfAgent, freshCsrf, signIn, type TestApp } from "../support/test-app";
@@ -55,6 +55,13 @@ const counts = async () => ({
 const fake = async () => (await billingRuntimeOf(t.db)!.client()).fake!;
 
 describe("shared helpers", () => {
+  it("a pass is active strictly before its end date, and never when unpaid", () => {
+    const now = Date.parse("2026-12-02T12:00:00Z");
+    expect(isPassActive("2026-12-02T12:00:01Z", now)).toBe(true);
+    expect(isPassActive("2026-12-02T12:00:00Z", now)).toBe(false);
+    expect(isPassActive(null, now)).toBe(false);
+  });
+
   it("Luhn: test cards pass, a one-digit typo fails", () => {
     expect(luhnValid("4242424242424242")).toBe(true);
     expect(luhnValid("4000000000000002")).toBe(true);

@@ -1,3 +1,4 @@
+import { isPassActive } from "@shared/api/billing";
 import type { StudentCohortSummary, StudentSummary } from "@shared/api/me";
 import { Link } from "react-router";
 import { useMe } from "@/api/auth";
@@ -100,7 +101,7 @@ function StudentOverview({ summary }: { summary: StudentSummary }) {
 
 /** A self-learner's pass instead of cohorts: until when it runs, or how to renew it. */
 function SelfStudyPass({ passValidUntil }: { passValidUntil: string | null }) {
-  const active = passValidUntil !== null && new Date(passValidUntil).getTime() > Date.now();
+  const active = isPassActive(passValidUntil);
   return (
     <section aria-labelledby="learn-pass">
       <h2 id="learn-pass" className="text-2xl font-semibold">

@@ -4,7 +4,7 @@
  * accounts get their access from the school: a short note and a link home instead of a form.
  */
 import type { PublicUser } from "@shared/api/auth";
-import { formatMoney, renewPassRequestSchema, type PassOffer, type RenewPassRequest } from "@shared/api/billing";
+import { formatMoney, isPassActive, renewPassRequestSchema, type PassOffer, type RenewPassRequest } from "@shared/api/billing";
 import { ROLE_HOME } from "@shared/api/roles";
 import { usePassOffer, useRenewPass } from "@/api/billing";
 import { isApiError } from "@/api/client";
@@ -82,7 +82,7 @@ function SchoolAccess({ user }: { user: PublicUser }) {
 
 /** The current end date, and what a renewal adds to it. */
 function PassStatus({ passValidUntil, offer }: { passValidUntil: string | null; offer: PassOffer }) {
-  const active = passValidUntil !== null && new Date(passValidUntil).getTime() > Date.now();
+  const active = isPassActive(passValidUntil);
   return (
     <section aria-labelledby="pass-status-title">
       <Card className="border-t-4 border-t-temper-blue">
